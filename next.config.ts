@@ -1,0 +1,7 @@
+import type { NextConfig } from "next";
+
+const nextConfig: NextConfig = {
+  serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],
+};
+
+export default nextConfig;

@@ -1,0 +1,15 @@
+import { defineConfig } from "vitest/config";
+import path from "node:path";
+
+/** Unit and integration tests: pure lib/ tests plus db/actions tests against temp SQLite files. */
+export default defineConfig({
+  resolve: { alias: { "@": path.resolve(__dirname) } },
+  test: {
+    pool: "forks",
+    include: ["lib/**/*.test.ts", "tests/**/*.test.ts"],
+    exclude: ["tests/browser/**", "node_modules/**"],
+    testTimeout: 60_000,
+    hookTimeout: 120_000,
+    setupFiles: ["tests/setup.ts"],
+  },
+});
