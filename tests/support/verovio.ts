@@ -28,7 +28,9 @@ let toolkit: Promise<Toolkit> | null = null;
 /** The shared verovio toolkit (created on first use). */
 export function verovioToolkit(): Promise<Toolkit> {
   toolkit ??= (async () => {
+    // @ts-expect-error verovio ships no type declarations for its wasm entry
     const { default: createVerovioModule } = await import("verovio/wasm");
+    // @ts-expect-error verovio ships no type declarations for its esm entry
     const { VerovioToolkit } = await import("verovio/esm");
     return new VerovioToolkit(await createVerovioModule()) as unknown as Toolkit;
   })();
