@@ -2,6 +2,8 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],
+  // forbidden() + app/forbidden.tsx: a student opening a teacher page gets a real 403.
+  experimental: { authInterrupts: true },
 };
 
 export default nextConfig;

@@ -1,0 +1,43 @@
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { nextCookies } from "better-auth/next-js";
+import { db } from "../db";
+import * as schema from "../db/schema";
+import { authSecret, readEnv } from "./env";
+
+const env = readEnv();
+
+/** Shortest password Knotwork accepts; the sign-up form and invitation form share it. */
+export const MIN_PASSWORD_LENGTH = 8;
+export const MAX_PASSWORD_LENGTH = 128;
+
+/**
+ * better-auth, e-mail + password. Accounts are never created through better-auth's own sign-up
+ * endpoint: teachers sign up through Knotwork's form (which creates the studio in the same
+ * transaction) and students through an invitation, so the role is always decided on the server.
+ */
+export const auth = betterAuth({
+  appName: "Knotwork",
+  database: drizzleAdapter(db, { provider: "sqlite", schema }),
+  secret: authSecret(env),
+  baseURL: env.BETTER_AUTH_URL,
+  telemetry: { enabled: false },
+  emailAndPassword: {
+    enabled: true,
+    minPasswordLength: MIN_PASSWORD_LENGTH,
+    maxPasswordLength: MAX_PASSWORD_LENGTH,
+  },
+  disabledPaths: ["/sign-up/email"],
+  rateLimit: {
+    enabled: true,
+    window: env.AUTH_RATE_LIMIT_WINDOW,
+    max: env.AUTH_RATE_LIMIT_MAX,
+    customRules: {
+      "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: 10 },
+    },
+  },
+  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+  plugins: [nextCookies()],
+});
+
+export type AuthSession = typeof auth.$Infer.Session;
