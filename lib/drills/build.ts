@@ -1,0 +1,202 @@
+/**
+ * Shared drill assembly for every family: lay the content into full bars, put the right hand on
+ * staff 1 and the left on staff 2 (one staff for a one-hand drill), choose clefs by range, keep the
+ * score's fingerings, add estimated ones, measure the span per hand and collect warnings.
+ */
+import Fraction from "fraction.js";
+import type { Clef, Hand, Measure, NoteEvent, Passage, Score, Sonority, TimeSignature } from "../score/types";
+import type { Drill, DrillContext, DrillWarning, HandProfile, SpanReport } from "./types";
+import { barLength, laySegments, type LaidEvent, type Segment, type Slot, type SlotNote } from "./layout";
+import { mulberry32 } from "./rng";
+import { addEstimatedFingering, measureSpan, PROFILE } from "./span";
+
+export { barLength, writtenPieces, laySegments } from "./layout";
+export type { Segment, Slot, SlotNote } from "./layout";
+
+/** Lowest and highest piano keys: A0 = MIDI 21, C8 = MIDI 108 (FACTS.md §1). */
+export const PIANO_RANGE = { low: 21, high: 108 } as const;
+
+/** What a family hands to `buildDrill`. */
+export interface DrillSpec {
+  readonly family: string;
+  readonly variant: string;
+  readonly title: string;
+  readonly teacherNote: string;
+  readonly studentNote: string;
+  readonly segments: readonly Segment[];
+  /** Hands written; defaults to the passage's hand. */
+  readonly hands?: Hand | "both";
+  readonly tempo?: { readonly start: number; readonly target: number };
+  readonly warnings?: readonly DrillWarning[];
+  /** Time signature of the drill; defaults to the passage's. */
+  readonly time?: TimeSignature;
+}
+
+/**
+ * A drill context with defaults: the standard profile, seed 1, safety on.
+ *
+ * @example
+ * const ctx = makeContext({ seed: 7 });
+ */
+export function makeContext(o: { profile?: HandProfile; seed?: number; safety?: boolean } = {}): DrillContext {
+  return { profile: o.profile ?? PROFILE, rng: mulberry32(o.seed ?? 1), safety: o.safety ?? true };
+}
+
+/**
+ * Default tempi from the score: the target is the passage's metronome mark (80 when none, common
+ * practice) and practice starts at 60 % of it (common practice).
+ *
+ * @example
+ * defaultTempo(passage); // { start: 48, target: 80 } when the passage has no mark
+ */
+export function defaultTempo(passage: Passage): { start: number; target: number } {
+  const target = passage.measures.find((m) => m.tempo !== undefined)?.tempo ?? 80;
+  return { start: Math.max(20, Math.round(target * 0.6)), target };
+}
+
+/**
+ * A slot that plays a passage sonority as written (its notes keep their fingering).
+ *
+ * @example
+ * passage.sonorities.right.map((s) => sonoritySlot(s));
+ */
+export function sonoritySlot(s: Sonority, duration: Fraction = s.duration, extra: Partial<Slot> = {}): Slot {
+  return { duration, notes: s.notes.map(noteOf), ...extra };
+}
+
+/**
+ * A slot note from a passage note (pitch plus source, so its fingering travels with it).
+ *
+ * @example
+ * noteOf(passage.events[0]).pitch;
+ */
+export function noteOf(e: NoteEvent): SlotNote {
+  if (!e.pitch) throw new RangeError(`event ${e.id} is a rest`);
+  return { pitch: e.pitch, source: e };
+}
+
+/**
+ * A rest slot.
+ *
+ * @example
+ * restSlot(new Fraction(1, 2)); // an eighth rest
+ */
+export function restSlot(duration: Fraction, tuplet?: Slot["tuplet"]): Slot {
+  return { duration, notes: [], ...(tuplet ? { tuplet } : {}) };
+}
+
+/** The hands of a passage, right first. */
+export function passageHands(passage: Passage): Hand[] {
+  return passage.hand === "both" ? ["right", "left"] : [passage.hand];
+}
+
+/**
+ * The offset of the passage's first note from its bar's start (keeps a pickup's place in the bar).
+ *
+ * @example
+ * leadOf(passage).toFraction(); // "3" for a one-beat pickup in 4/4
+ */
+export function leadOf(passage: Passage): Fraction {
+  const first = passage.measures[0];
+  if (!first) return new Fraction(0);
+  const bar = barLength(passage.time);
+  const missing = bar.sub(first.length);
+  return missing.compare(0) > 0 && missing.compare(bar) < 0 ? missing : new Fraction(0);
+}
+
+function clefFor(hand: Hand, staff: number, events: readonly LaidEvent[]): Clef {
+  const midis = events.filter((e) => e.hand === hand && e.pitch).map((e) => e.pitch!.midi);
+  const mean = midis.length ? midis.reduce((a, b) => a + b, 0) / midis.length : hand === "right" ? 67 : 50;
+  const treble = hand === "right" ? mean >= 55 : mean > 65;
+  return treble ? { staff, sign: "G", line: 2 } : { staff, sign: "F", line: 4 };
+}
+
+function lcm(a: number, b: number): number {
+  const gcd = (x: number, y: number): number => (y === 0 ? x : gcd(y, x % y));
+  return (a / gcd(a, b)) * b;
+}
+
+/**
+ * Build a complete drill: full bars, staves, clefs, fingering, span and warnings.
+ *
+ * @example
+ * const drill = buildDrill(passage, { family: "blocking", variant: "block", title: "Blocked", teacherNote: "…", studentNote: "…", segments: [{ right: slots }] }, makeContext());
+ */
+export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext): Drill {
+  const hands: Hand[] = spec.hands ? (spec.hands === "both" ? ["right", "left"] : [spec.hands]) : passageHands(passage);
+  const time = spec.time ?? passage.time;
+  const bar = barLength(time);
+  const { events: laid, bars, tempos } = laySegments(spec.segments, hands, time);
+  const staffOf = (h: Hand) => (hands.length === 2 && h === "left" ? 2 : 1);
+  const clefs = hands.map((h) => clefFor(h, staffOf(h), laid));
+
+  let divisions = 1;
+  for (const e of laid) divisions = lcm(divisions, lcm(Number(e.onset.d), Number(e.duration.d)));
+
+  const measures: Measure[] = Array.from({ length: bars }, (_, i) => ({
+    index: i,
+    number: String(i + 1),
+    implicit: false,
+    start: bar.mul(i),
+    length: bar,
+    time,
+    key: passage.key,
+    clefs,
+    divisions,
+    changes: [],
+    ...(tempos.has(i) ? { tempo: tempos.get(i) } : {}),
+  }));
+
+  const ordered = [...laid].sort(
+    (a, b) => a.onset.compare(b.onset) || staffOf(a.hand) - staffOf(b.hand) || (a.pitch?.midi ?? -1) - (b.pitch?.midi ?? -1),
+  );
+  let events: NoteEvent[] = ordered.map(({ hand, ...e }, i) => ({
+    ...e,
+    id: `e${i + 1}`,
+    part: "P1",
+    staff: staffOf(hand),
+    voice: String(staffOf(hand)),
+  }));
+  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right", ctx.profile);
+
+  const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
+  const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));
+  if (outOfRange.length) {
+    warnings.push({ code: "range", message: `${outOfRange.length} note(s) fall outside the keyboard (A0–C8).` });
+  }
+  const maxSpan: { right?: SpanReport; left?: SpanReport } = {};
+  for (const h of hands) {
+    const report = measureSpan(events.filter((e) => e.staff === staffOf(h)), ctx.profile);
+    if (!report) continue;
+    maxSpan[h] = report;
+    if (report.overComfortable) {
+      warnings.push({
+        code: "span",
+        message: `The ${h} hand needs ${report.semitones} semitones (${Math.round(report.mm)} mm), more than its comfortable span.`,
+      });
+    }
+  }
+
+  const fingeringSource: Record<string, "score" | "estimated" | "none"> = {};
+  for (const e of events) if (e.pitch) fingeringSource[e.id] = e.fingeringSource ?? "none";
+
+  const score: Score = {
+    meta: { title: spec.title, composer: "", subtitle: spec.studentNote },
+    parts: [{ id: "P1", name: "Piano", staves: hands.length }],
+    measures,
+    events,
+  };
+  return {
+    family: spec.family,
+    variant: spec.variant,
+    title: spec.title,
+    teacherNote: spec.teacherNote,
+    studentNote: spec.studentNote,
+    hands: hands.length === 2 ? "both" : hands[0],
+    score,
+    tempo: spec.tempo ?? defaultTempo(passage),
+    maxSpan,
+    warnings,
+    fingeringSource,
+  };
+}

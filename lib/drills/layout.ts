@@ -1,0 +1,196 @@
+/**
+ * Lay out drill content into bars: durations become written notes (type, dots, tuplet), notes
+ * that cross a barline are split and tied, and every bar is completed with rests so that it sums
+ * exactly to the time signature.
+ */
+import Fraction from "fraction.js";
+import type { Hand, NoteEvent, NoteMark, Pitch, TimeSignature, Written } from "../score/types";
+
+/** One note of a drill slot; `source` is the passage note it comes from (its fingering is kept). */
+export interface SlotNote {
+  readonly pitch: Pitch;
+  readonly source?: NoteEvent;
+}
+
+/** One written sonority (or rest, when `notes` is empty) of a drill, with its exact duration. */
+export interface Slot {
+  /** Sounding duration in quarter notes. */
+  readonly duration: Fraction;
+  readonly notes: readonly SlotNote[];
+  readonly tuplet?: { readonly actual: number; readonly normal: number };
+  readonly marks?: readonly NoteMark[];
+  readonly words?: string;
+  readonly dynamic?: string;
+}
+
+/** A stretch of drill music that starts on a new bar; both hands run side by side. */
+export interface Segment {
+  readonly right?: readonly Slot[];
+  readonly left?: readonly Slot[];
+  /** Rests before the first slot, e.g. to keep a pickup's place in the bar. */
+  readonly lead?: Fraction;
+  /** Metronome mark written in the first bar of the segment. */
+  readonly tempo?: number;
+}
+
+/** A laid-out hand: events without ids yet, plus the number of bars used. */
+export interface LaidEvent extends Omit<NoteEvent, "id" | "part" | "staff" | "voice"> {
+  readonly hand: Hand;
+}
+
+const BASES: readonly [string, Fraction][] = [
+  ["whole", new Fraction(4)],
+  ["half", new Fraction(2)],
+  ["quarter", new Fraction(1)],
+  ["eighth", new Fraction(1, 2)],
+  ["16th", new Fraction(1, 4)],
+  ["32nd", new Fraction(1, 8)],
+  ["64th", new Fraction(1, 16)],
+  ["128th", new Fraction(1, 32)],
+];
+
+/** Every written value (type with 0–2 dots), longest first. */
+const VALUES: readonly { type: string; dots: number; value: Fraction }[] = BASES.flatMap(
+  ([type, v]) => [
+    { type, dots: 2, value: v.mul(7, 4) },
+    { type, dots: 1, value: v.mul(3, 2) },
+    { type, dots: 0, value: v },
+  ],
+).sort((a, b) => b.value.compare(a.value));
+
+/**
+ * Bar length in quarter notes.
+ *
+ * @example
+ * barLength({ beats: 6, beatType: 8 }).toFraction(); // "3"
+ */
+export function barLength(time: TimeSignature): Fraction {
+  return new Fraction(time.beats * 4, time.beatType);
+}
+
+/**
+ * Split a sounding duration into written pieces (longest first), keeping a tuplet ratio.
+ * Throws when a piece would be shorter than a 128th.
+ *
+ * @example
+ * writtenPieces(new Fraction(5, 4)).map((p) => p.written.type); // ["quarter", "16th"]
+ * writtenPieces(new Fraction(1, 3), { actual: 3, normal: 2 })[0].written.type; // "eighth"
+ */
+export function writtenPieces(
+  duration: Fraction,
+  tuplet?: { actual: number; normal: number },
+): { duration: Fraction; written: Written }[] {
+  const factor = tuplet ? new Fraction(tuplet.actual, tuplet.normal) : new Fraction(1);
+  let rest = duration.mul(factor);
+  const out: { duration: Fraction; written: Written }[] = [];
+  while (rest.compare(0) > 0) {
+    const v = VALUES.find((c) => c.value.compare(rest) <= 0);
+    if (!v) throw new RangeError(`duration ${duration.toFraction()} cannot be written`);
+    out.push({
+      duration: v.value.div(factor),
+      written: { type: v.type, dots: v.dots, tuplet: tuplet ? { ...tuplet } : null },
+    });
+    rest = rest.sub(v.value);
+  }
+  return out;
+}
+
+/** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
+function layHand(
+  hand: Hand,
+  slots: readonly Slot[],
+  start: Fraction,
+  bar: Fraction,
+): { events: LaidEvent[]; end: Fraction } {
+  const events: LaidEvent[] = [];
+  let t = start;
+  for (const slot of slots) {
+    const slotEnd = t.add(slot.duration);
+    const pieces: { onset: Fraction; duration: Fraction; written: Written }[] = [];
+    let cursor = t;
+    while (cursor.compare(slotEnd) < 0) {
+      const barEnd = cursor.div(bar).floor().add(1).mul(bar);
+      const chunkEnd = barEnd.compare(slotEnd) < 0 ? barEnd : slotEnd;
+      for (const p of writtenPieces(chunkEnd.sub(cursor), slot.tuplet)) {
+        pieces.push({ onset: cursor, duration: p.duration, written: p.written });
+        cursor = cursor.add(p.duration);
+      }
+    }
+    pieces.forEach((p, i) => {
+      const measure = p.onset.div(bar).floor().valueOf();
+      const first = i === 0;
+      const tie = pieces.length === 1 ? "none" : first ? "start" : i === pieces.length - 1 ? "stop" : "continue";
+      const extra = first
+        ? { marks: slot.marks, words: slot.words, dynamic: slot.dynamic }
+        : {};
+      if (slot.notes.length === 0) {
+        events.push({ hand, measure, onset: p.onset, duration: p.duration, written: p.written, pitch: null, chord: false, tie: "none", ...clean(extra) });
+        return;
+      }
+      const sorted = [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi);
+      sorted.forEach((n, k) => {
+        const fingering = first && n.source?.fingering?.length ? n.source.fingering : undefined;
+        events.push({
+          hand,
+          measure,
+          onset: p.onset,
+          duration: p.duration,
+          written: p.written,
+          pitch: n.pitch,
+          chord: k > 0,
+          tie,
+          ...(fingering ? { fingering, fingeringSource: "score" as const } : {}),
+          ...clean(extra),
+        });
+      });
+    });
+    t = slotEnd;
+  }
+  return { events, end: t };
+}
+
+function clean<T extends object>(o: T): Partial<T> {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
+}
+
+/** Rests from `from` to `to`, split at barlines. */
+function restsBetween(hand: Hand, from: Fraction, to: Fraction, bar: Fraction): LaidEvent[] {
+  if (from.compare(to) >= 0) return [];
+  return layHand(hand, [{ duration: to.sub(from), notes: [] }], from, bar).events;
+}
+
+/**
+ * Lay segments into full bars for the given hands. Each segment starts on a new bar; each hand is
+ * completed with rests to the end of the segment's last bar.
+ *
+ * @example
+ * const { events, bars } = laySegments([{ right: [{ duration: new Fraction(3), notes: [] }] }], ["right"], { beats: 4, beatType: 4 });
+ * // bars === 1; the right hand has a dotted-half rest and a quarter rest
+ */
+export function laySegments(
+  segments: readonly Segment[],
+  hands: readonly Hand[],
+  time: TimeSignature,
+): { events: LaidEvent[]; bars: number; tempos: Map<number, number> } {
+  const bar = barLength(time);
+  const events: LaidEvent[] = [];
+  const tempos = new Map<number, number>();
+  let barIndex = 0;
+  for (const seg of segments) {
+    const segStart = bar.mul(barIndex);
+    const contentStart = segStart.add(seg.lead ?? 0);
+    const laid = hands.map((h) => layHand(h, seg[h] ?? [], contentStart, bar));
+    const maxEnd = laid.reduce((m, l) => (l.end.compare(m) > 0 ? l.end : m), contentStart);
+    let bars = maxEnd.sub(segStart).div(bar).ceil().valueOf();
+    if (bars < 1) bars = 1;
+    const segEnd = segStart.add(bar.mul(bars));
+    hands.forEach((h, i) => {
+      events.push(...restsBetween(h, segStart, contentStart, bar));
+      events.push(...laid[i].events);
+      events.push(...restsBetween(h, laid[i].end, segEnd, bar));
+    });
+    if (seg.tempo !== undefined) tempos.set(barIndex, seg.tempo);
+    barIndex += bars;
+  }
+  return { events, bars: barIndex, tempos };
+}
