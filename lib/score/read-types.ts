@@ -1,0 +1,119 @@
+/**
+ * Internal shapes the streaming reader fills while it walks the file, before `buildScore` turns them
+ * into the public readonly model.
+ */
+import type Fraction from "fraction.js";
+import type {
+  AttributeChange, Clef, Fingering, KeySignature, NoteMark, RepeatMarks, ScoreWarning, TieFlag,
+  TimeSignature, Written, Pitch,
+} from "./types";
+
+/** Limits on what one file may hold. */
+export interface ReadLimits {
+  readonly maxMeasures: number;
+  readonly maxNotes: number;
+}
+
+/** Options of `readScore`. */
+export interface ReadOptions {
+  /** Most measures per part (default 5,000). */
+  readonly maxMeasures?: number;
+  /** Most notes in the whole file (default 200,000). */
+  readonly maxNotes?: number;
+}
+
+export const DEFAULT_LIMITS: ReadLimits = { maxMeasures: 5000, maxNotes: 200_000 };
+
+/** A note as read, with its offset inside its bar; onsets become absolute once bar lengths are known. */
+export interface RawEvent {
+  readonly part: string;
+  readonly staff: number;
+  readonly voice: string;
+  readonly measure: number;
+  readonly offset: Fraction;
+  readonly duration: Fraction;
+  readonly written: Written;
+  readonly pitch: Pitch | null;
+  readonly chord: boolean;
+  readonly tie: TieFlag;
+  readonly grace: boolean;
+  readonly fingering: readonly Fingering[];
+  readonly marks: readonly NoteMark[];
+  readonly dynamic?: string;
+  readonly words?: string;
+}
+
+/** Key, time and clefs in force. */
+export interface AttrState {
+  key: KeySignature;
+  time: TimeSignature;
+  clefs: Clef[];
+}
+
+/** One bar of one part as read. */
+export interface RawMeasure {
+  number: string;
+  implicit: boolean;
+  /** Furthest position reached inside the bar. */
+  length: Fraction;
+  divisions: number;
+  start: AttrState;
+  changes: AttributeChange[];
+  repeat?: RepeatMarks;
+  tempo?: number;
+}
+
+export interface RawPart {
+  readonly id: string;
+  staves: number;
+  readonly measures: RawMeasure[];
+  readonly events: RawEvent[];
+}
+
+export interface RawScore {
+  title: string;
+  movementTitle: string;
+  composer: string;
+  readonly partNames: Map<string, string>;
+  readonly partOrder: string[];
+  readonly parts: Map<string, RawPart>;
+  readonly warnings: ScoreWarning[];
+}
+
+/** The note under construction between `<note>` and `</note>`. */
+export interface NoteDraft {
+  chord: boolean;
+  grace: boolean;
+  cue: boolean;
+  rest: boolean;
+  unpitched: boolean;
+  step: string;
+  alter: number;
+  octave: number;
+  duration: number | null;
+  voice: string;
+  staff: number;
+  type: string | null;
+  dots: number;
+  actual: number;
+  normal: number;
+  tieStart: boolean;
+  tieStop: boolean;
+  fingering: Fingering[];
+  marks: NoteMark[];
+  dynamic?: string;
+}
+
+/**
+ * A fresh, empty note draft.
+ *
+ * @example
+ * newNoteDraft().voice; // "1"
+ */
+export function newNoteDraft(): NoteDraft {
+  return {
+    chord: false, grace: false, cue: false, rest: false, unpitched: false, step: "", alter: 0, octave: 4,
+    duration: null, voice: "1", staff: 1, type: null, dots: 0, actual: 0, normal: 0, tieStart: false,
+    tieStop: false, fingering: [], marks: [],
+  };
+}

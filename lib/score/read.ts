@@ -1,0 +1,63 @@
+/**
+ * `readScore`: MusicXML text, or the bytes of a .musicxml / .xml / .mxl file, into the exact model.
+ */
+import { ScoreError } from "./errors";
+import { isZip, unpackMxl } from "./mxl";
+import { buildScore } from "./read-build";
+import { parsePartwise } from "./read-partwise";
+import { DEFAULT_LIMITS, type ReadOptions } from "./read-types";
+import { assertSafeXml } from "./sanitize";
+import type { Score, ScoreWarning } from "./types";
+
+export type { ReadOptions } from "./read-types";
+
+/** What `readScore` returns: the model and everything it had to tolerate. */
+export interface ReadResult {
+  readonly score: Score;
+  readonly warnings: ScoreWarning[];
+}
+
+/**
+ * Read partwise MusicXML (text or bytes, zipped .mxl detected by content) into a `Score`.
+ * Throws `ScoreError` only when the file cannot be used; oddities become warnings.
+ *
+ * @example
+ * const { score, warnings } = readScore(xmlText);
+ * score.events[0].onset.toFraction(); // "0"
+ */
+export function readScore(input: string | Uint8Array, options: ReadOptions = {}): ReadResult {
+  const text = scoreText(input);
+  assertSafeXml(text);
+  const limits = { ...DEFAULT_LIMITS, ...options };
+  const raw = parsePartwise(text, limits);
+  const score = buildScore(raw);
+  return { score, warnings: raw.warnings };
+}
+
+/**
+ * The MusicXML text of an upload: unpacks .mxl, decodes bytes (UTF-8, UTF-16 with BOM, or the
+ * encoding the XML declaration names). Text input passes through unchanged.
+ *
+ * @example
+ * scoreText(new TextEncoder().encode("<score-partwise/>")); // "<score-partwise/>"
+ */
+export function scoreText(input: string | Uint8Array): string {
+  if (typeof input === "string") return input;
+  const bytes = isZip(input) ? unpackMxl(input).xml : input;
+  return decodeXml(bytes);
+}
+
+function decodeXml(bytes: Uint8Array): string {
+  if (bytes[0] === 0xff && bytes[1] === 0xfe) return new TextDecoder("utf-16le").decode(bytes);
+  if (bytes[0] === 0xfe && bytes[1] === 0xff) return new TextDecoder("utf-16be").decode(bytes);
+  const head = new TextDecoder("latin1").decode(bytes.subarray(0, 200));
+  const declared = /^\s*<\?xml[^>]*encoding\s*=\s*["']([\w.-]+)["']/.exec(head)?.[1];
+  let decoder: TextDecoder;
+  try {
+    decoder = new TextDecoder(declared && !/^utf-?16$/i.test(declared) ? declared : "utf-8");
+  } catch {
+    throw new ScoreError("xml-malformed", `Unknown character encoding "${declared}"`);
+  }
+  const text = decoder.decode(bytes);
+  return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
+}
