@@ -63,6 +63,19 @@ describe("buildDrill", () => {
     expect(d.hands).toBe("both");
   });
 
+  test("unfingered notes get an estimated finger 1–5, marked estimated; written ones stay", () => {
+    const p = makePassage({ right: "C4/8@1 D4/8 E4/8 F4/8 G4/2" });
+    const d = buildDrill(p, { ...spec, segments: [{ right: p.sonorities.right.map((s) => sonoritySlot(s)) }] }, makeContext());
+    const notes = d.score.events.filter((e) => e.pitch);
+    expect(d.fingeringSource[notes[0].id]).toBe("score");
+    expect(notes[0].fingering?.[0].finger).toBe(1);
+    for (const n of notes.slice(1)) {
+      expect(d.fingeringSource[n.id]).toBe("estimated");
+      expect(n.fingering?.[0].finger).toBeGreaterThanOrEqual(1);
+      expect(n.fingering?.[0].finger).toBeLessThanOrEqual(5);
+    }
+  });
+
   test("a left-hand drill sits on one staff, in treble clef when it lies high", () => {
     const p = makePassage({ left: "C6/4 D6/4" });
     const d = buildDrill(p, { ...spec, segments: [{ left: p.sonorities.left.map((s) => sonoritySlot(s)) }] }, makeContext());

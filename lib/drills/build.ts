@@ -157,7 +157,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
     staff: staffOf(hand),
     voice: String(staffOf(hand)),
   }));
-  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right", ctx.profile);
+  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right");
 
   const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
   const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));

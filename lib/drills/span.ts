@@ -5,6 +5,7 @@
 import type { Hand, NoteEvent, Pitch } from "../score/types";
 import type { HandProfile, SpanReport } from "./types";
 import { DEFAULT_PROFILE, spanOf } from "./hand";
+import { estimateFingering } from "./fingering";
 
 /** The profile drills use when none is given (hand.ts `DEFAULT_PROFILE`). */
 export const PROFILE: HandProfile = DEFAULT_PROFILE;
@@ -45,18 +46,25 @@ export function pitchSpan(pitches: readonly Pitch[], profile: HandProfile): Span
 }
 
 /**
- * Add estimated fingering (marked "estimated") to unfingered notes, per hand; the score's own
- * fingerings stay as they are. Until the fingering model is wired in, notes stay unfingered.
+ * Add estimated fingering (marked "estimated", from `estimateFingering`) to unfingered notes, per
+ * staff; the score's own fingerings stay as they are and steer the estimate. Tied continuations
+ * get no finger.
  *
  * @example
- * addEstimatedFingering(events, () => "right", PROFILE);
+ * addEstimatedFingering(events, () => "right");
  */
-export function addEstimatedFingering(
-  events: NoteEvent[],
-  handOfStaff: (staff: number) => Hand,
-  profile: HandProfile,
-): NoteEvent[] {
-  void handOfStaff;
-  void profile;
-  return events;
+export function addEstimatedFingering(events: NoteEvent[], handOfStaff: (staff: number) => Hand): NoteEvent[] {
+  const out = [...events];
+  const staves = [...new Set(events.map((e) => e.staff))];
+  for (const staff of staves) {
+    const idx = events.map((e, i) => (e.staff === staff ? i : -1)).filter((i) => i >= 0);
+    const { fingers } = estimateFingering(idx.map((i) => events[i]), handOfStaff(staff));
+    idx.forEach((i, k) => {
+      const e = events[i];
+      const f = fingers[k];
+      if (!e.pitch || e.fingering?.length || f == null || e.tie === "stop" || e.tie === "continue") return;
+      out[i] = { ...e, fingering: [{ finger: f }], fingeringSource: "estimated" };
+    });
+  }
+  return out;
 }
