@@ -32,18 +32,19 @@ export function midiOf(step: Pitch["step"], alter: number, octave: number, shift
 }
 
 /**
- * Build a `Pitch`; `shift` is the sounding offset in semitones (octave-shift lines, transposition).
+ * Build a `Pitch`; `shift` is a sounding offset in semitones (a transposing part's `<transpose>`).
  *
  * @example
- * makePitch("C", 0, 4, 12).midi; // 72 — written middle C under an 8va line
+ * makePitch("C", 0, 4, -2).midi; // 58 — a B♭ instrument's written C
  */
 export function makePitch(step: Pitch["step"], alter: number, octave: number, shift = 0): Pitch {
   return { step, alter, octave, midi: midiOf(step, alter, octave, shift) };
 }
 
 /**
- * Sounding semitone offset of an `<octave-shift>` line: `type="down"` (written lower, e.g. 8va) sounds
- * higher. Size 8 = one octave, 15 = two, 22 = three.
+ * Display offset of an `<octave-shift>` line: `type="down"` (an 8va line, notes drawn lower than
+ * their pitch data) is +12. The reader does not apply it: MusicXML's `<pitch>` is already the true pitch;
+ * a writer uses it to draw notes under a line. Size 8 = one octave, 15 = two, 22 = three.
  *
  * @example
  * octaveShiftSemitones("down", 8); // 12

@@ -17,7 +17,7 @@ export interface Cursor {
   state: AttrState;
   measure: RawMeasure | null;
   measureIndex: number;
-  /** Sounding shift per staff from `<octave-shift>` lines, in semitones. */
+  /** Display shift per staff from `<octave-shift>` lines (semitones); pitch data is already true pitch. */
   shift: Map<number, number>;
   /** Sounding shift from `<transpose>`, in semitones. */
   transpose: number;

@@ -127,7 +127,8 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
   let pitch = null;
   if (!n.rest && !n.unpitched) {
     if (isStep(n.step) && Number.isFinite(n.octave)) {
-      pitch = makePitch(n.step, n.alter, n.octave, (c.shift.get(n.staff) ?? 0) + c.transpose);
+      // <octave-shift> lines change only the display: MusicXML's <pitch> data is already the true pitch.
+      pitch = makePitch(n.step, n.alter, n.octave, c.transpose);
     } else warn(raw, "bad-pitch", `A note has no readable <pitch>; read as a rest`, c.measureIndex, "pitch");
   } else if (n.unpitched) warn(raw, "unpitched", "Unpitched notes are read as rests", c.measureIndex, "unpitched");
   let dynamic = n.dynamic;
