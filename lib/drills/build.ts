@@ -85,6 +85,50 @@ export function restSlot(duration: Fraction, tuplet?: Slot["tuplet"]): Slot {
   return { duration, notes: [], ...(tuplet ? { tuplet } : {}) };
 }
 
+/**
+ * One hand of the passage as written, as slots from the passage's first bar to its end: rests
+ * fill the gaps, and a note held past the next onset is shortened to it (one line per hand).
+ * `map` may change each sonority's slot (marks, rhythm) given its index and written length.
+ *
+ * @example
+ * const slots = passageSlots(passage, "right", (s, i, slot) => (i === 0 ? { ...slot, marks: ["accent"] } : slot));
+ */
+export function passageSlots(
+  passage: Passage,
+  hand: Hand,
+  map: (s: Sonority, i: number, slot: Slot) => Slot | readonly Slot[] = (_s, _i, slot) => slot,
+  sonorities: readonly Sonority[] = passage.sonorities[hand],
+  range: { from: Fraction; to: Fraction } = passageRange(passage),
+): Slot[] {
+  const out: Slot[] = [];
+  let t = range.from;
+  sonorities.forEach((s, i) => {
+    if (s.onset.compare(t) > 0) out.push(restSlot(s.onset.sub(t)));
+    const next = sonorities[i + 1]?.onset ?? range.to;
+    const end = s.onset.add(s.duration);
+    const stop = end.compare(next) > 0 ? next : end;
+    const tuplet = s.notes[0]?.written.tuplet ?? undefined;
+    const slot: Slot = { duration: stop.sub(s.onset), notes: s.notes.map(noteOf), ...(tuplet ? { tuplet } : {}) };
+    const mapped = map(s, i, slot);
+    out.push(...(Array.isArray(mapped) ? (mapped as Slot[]) : [mapped as Slot]));
+    t = s.onset.add(slot.duration);
+  });
+  if (range.to.compare(t) > 0) out.push(restSlot(range.to.sub(t)));
+  return out;
+}
+
+/**
+ * Start and end of the passage in quarter notes.
+ *
+ * @example
+ * passageRange(passage).to.sub(passageRange(passage).from).toFraction(); // "8" for two 4/4 bars
+ */
+export function passageRange(passage: Passage): { from: Fraction; to: Fraction } {
+  const first = passage.measures[0];
+  const last = passage.measures[passage.measures.length - 1];
+  return { from: first ? first.start : new Fraction(0), to: last ? last.start.add(last.length) : new Fraction(0) };
+}
+
 /** The hands of a passage, right first. */
 export function passageHands(passage: Passage): Hand[] {
   return passage.hand === "both" ? ["right", "left"] : [passage.hand];

@@ -4,12 +4,14 @@
  * exactly to the time signature.
  */
 import Fraction from "fraction.js";
-import type { Hand, NoteEvent, NoteMark, Pitch, TimeSignature, Written } from "../score/types";
+import type { Fingering, Hand, NoteEvent, NoteMark, Pitch, TimeSignature, Written } from "../score/types";
 
 /** One note of a drill slot; `source` is the passage note it comes from (its fingering is kept). */
 export interface SlotNote {
   readonly pitch: Pitch;
   readonly source?: NoteEvent;
+  /** A fingering the generator chose (e.g. standard scale fingering), marked "estimated". */
+  readonly fingering?: readonly Fingering[];
 }
 
 /** One written sonority (or rest, when `notes` is empty) of a drill, with its exact duration. */
@@ -80,6 +82,7 @@ export function writtenPieces(
   duration: Fraction,
   tuplet?: { actual: number; normal: number },
 ): { duration: Fraction; written: Written }[] {
+  if (!tuplet || impliedTuplet(duration.mul(tuplet.actual, tuplet.normal))) tuplet = impliedTuplet(duration);
   const factor = tuplet ? new Fraction(tuplet.actual, tuplet.normal) : new Fraction(1);
   let rest = duration.mul(factor);
   const out: { duration: Fraction; written: Written }[] = [];
@@ -93,6 +96,23 @@ export function writtenPieces(
     rest = rest.sub(v.value);
   }
   return out;
+}
+
+/**
+ * The tuplet a duration needs when it is not a plain note value (its denominator is not a power
+ * of two): the odd part of the denominator in the time of the next lower power of two (3:2, 5:4 …).
+ *
+ * @example
+ * impliedTuplet(new Fraction(1, 3)); // { actual: 3, normal: 2 }
+ * impliedTuplet(new Fraction(3, 4)); // undefined
+ */
+export function impliedTuplet(duration: Fraction): { actual: number; normal: number } | undefined {
+  let odd = Number(duration.d);
+  while (odd % 2 === 0) odd /= 2;
+  if (odd === 1) return undefined;
+  let normal = 1;
+  while (normal * 2 < odd) normal *= 2;
+  return { actual: odd, normal };
 }
 
 /** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
@@ -129,7 +149,8 @@ function layHand(
       }
       const sorted = [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi);
       sorted.forEach((n, k) => {
-        const fingering = first && n.source?.fingering?.length ? n.source.fingering : undefined;
+        const fromScore = first && n.source?.fingering?.length ? n.source.fingering : undefined;
+        const chosen = first && !fromScore && n.fingering?.length ? n.fingering : undefined;
         events.push({
           hand,
           measure,
@@ -139,7 +160,8 @@ function layHand(
           pitch: n.pitch,
           chord: k > 0,
           tie,
-          ...(fingering ? { fingering, fingeringSource: "score" as const } : {}),
+          ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
+          ...(chosen ? { fingering: chosen, fingeringSource: "estimated" as const } : {}),
           ...clean(extra),
         });
       });
