@@ -1,0 +1,100 @@
+/**
+ * Pitch and key arithmetic for the families that move notes (sequence, octave-shift, thumb-pairs):
+ * the key's scale, diatonic and chromatic moves, mirrors. Built on `../spell` and tonal, so
+ * spelling follows the key.
+ */
+import { Interval, Note, Scale } from "tonal";
+import type { KeySignature, Pitch } from "../../score/types";
+import { keyScaleName, pitchFromName as namePitch, pitchName, transposePitch } from "../spell";
+
+/** Lowest and highest piano keys as MIDI numbers: A0 = 21, C8 = 108 (FACTS.md §1). */
+export const PIANO_LOW = 21;
+export const PIANO_HIGH = 108;
+
+/**
+ * The pitch classes of the key's scale, as tonal's `Scale.get(...).notes` spells them.
+ * @example keyScale({ fifths: 0, mode: "major" }) // ["C", "D", "E", "F", "G", "A", "B"]
+ */
+export function keyScale(key: KeySignature): string[] {
+  return Scale.get(keyScaleName(key)).notes;
+}
+
+/** Where a pitch sits in the key's scale: degree index 0…6 and the chromatic offset from that degree. */
+function scalePosition(p: Pitch, scale: readonly string[]): { degree: number; octave: number; alter: number } {
+  const letters = scale.map((n) => n[0]);
+  const degree = letters.indexOf(p.step);
+  const base = Note.get(scale[degree]);
+  // Octave of the scale degree counted from the tonic (tonic's octave starts each scale octave).
+  const tonicLetterIndex = "CDEFGAB".indexOf(scale[0][0]);
+  const letterIndex = "CDEFGAB".indexOf(p.step);
+  const octave = p.octave - (letterIndex < tonicLetterIndex ? 1 : 0);
+  return { degree, octave, alter: p.alter - base.alt };
+}
+
+/**
+ * Moves a pitch by `steps` degrees of the key's scale; a note outside the scale keeps its
+ * chromatic offset from its degree. Uses tonal's `Scale.degrees` for the scale notes.
+ * @example diatonicShift(pitchFromName("E4"), 1, { fifths: 0, mode: "major" }) // F4
+ */
+export function diatonicShift(p: Pitch, steps: number, key: KeySignature): Pitch {
+  const scale = keyScale(key);
+  const pos = scalePosition(p, scale);
+  const tonic = `${scale[0]}${pos.octave}`;
+  const degreeOf = Scale.degrees(`${tonic} ${keyScaleName(key).split(" ")[1]}`);
+  const k = pos.degree + steps;
+  const target = namePitch(degreeOf(k >= 0 ? k + 1 : k));
+  let out = target;
+  for (let i = 0; i < Math.abs(pos.alter); i++) out = transposePitch(out, pos.alter > 0 ? "1A" : "-1A");
+  return out;
+}
+
+/**
+ * The interval tonal names from `a` to `b` (negative when descending).
+ * @example intervalBetween(pitchFromName("C4"), pitchFromName("A3")) // "-3m"
+ */
+export function intervalBetween(a: Pitch, b: Pitch): string {
+  return Interval.distance(pitchName(a), pitchName(b));
+}
+
+/**
+ * The same interval in the opposite direction ("3M" ↔ "-3M").
+ * @example negateInterval("-3m") // "3m"
+ */
+export function negateInterval(iv: string): string {
+  return iv.startsWith("-") ? iv.slice(1) : iv === "1P" ? iv : `-${iv}`;
+}
+
+/**
+ * Mirrors `p` around `axis` chromatically, with `target` as the mirrored axis: the interval axis→p
+ * is applied to `target` in the opposite direction (tonal's `Interval.distance` / `Note.transpose`).
+ * @example mirrorChromatic(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3")) // Ab2
+ */
+export function mirrorChromatic(axis: Pitch, p: Pitch, target: Pitch): Pitch {
+  return transposePitch(target, negateInterval(intervalBetween(axis, p)));
+}
+
+/**
+ * Mirrors `p` around `axis` by scale degrees of the key: k degrees above the axis becomes
+ * k degrees below `target`.
+ * @example mirrorDiatonic(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3"), { fifths: 0, mode: "major" }) // A2
+ */
+export function mirrorDiatonic(axis: Pitch, p: Pitch, target: Pitch, key: KeySignature): Pitch {
+  return diatonicShift(target, -degreeDistance(axis, p, key), key);
+}
+
+/**
+ * Number of scale degrees from `a` up to `b` (negative when `b` is lower), counted by letter names.
+ * @example degreeDistance(pitchFromName("C4"), pitchFromName("G4"), { fifths: 0, mode: "major" }) // 4
+ */
+export function degreeDistance(a: Pitch, b: Pitch, _key: KeySignature): number {
+  const idx = (p: Pitch) => p.octave * 7 + "CDEFGAB".indexOf(p.step);
+  return idx(b) - idx(a);
+}
+
+/**
+ * True when every pitch lies on the piano, A0 (21) … C8 (108) (FACTS.md §1).
+ * @example onPiano([pitchFromName("A0"), pitchFromName("C8")]) // true
+ */
+export function onPiano(pitches: readonly Pitch[]): boolean {
+  return pitches.every((p) => p.midi >= PIANO_LOW && p.midi <= PIANO_HIGH);
+}
