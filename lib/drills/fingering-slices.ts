@@ -1,0 +1,121 @@
+/**
+ * Slices for the fingering search: the notes of one hand grouped by onset (a chord or a single note),
+ * with the candidate finger tuples of each slice.
+ */
+import type { Hand, NoteEvent } from "../score/types";
+
+/** Notes struck together by one hand, distinct pitches low to high. */
+export interface Slice {
+  /** Distinct MIDI numbers, ascending (at most five). */
+  readonly midis: readonly number[];
+  /** Indexes into the input events, per distinct pitch. */
+  readonly members: readonly (readonly number[])[];
+  /** Candidate finger tuples, one finger per distinct pitch. */
+  readonly states: readonly (readonly number[])[];
+  /** 0-based measure index of the slice. */
+  readonly measure: number;
+}
+
+/** The slices plus where tie continuations take their finger from. */
+export interface SliceSet {
+  readonly slices: readonly Slice[];
+  /** Event index → index of the struck event it continues (tied notes keep their finger). */
+  readonly tiedTo: ReadonlyMap<number, number>;
+}
+
+const COMBOS: readonly (readonly number[])[][] = buildCombos();
+
+function buildCombos(): (readonly number[])[][] {
+  const byLength: (readonly number[])[][] = [[], [], [], [], [], []];
+  for (let mask = 1; mask < 32; mask++) {
+    const fingers = [1, 2, 3, 4, 5].filter((f) => mask & (1 << (f - 1)));
+    byLength[fingers.length]!.push(fingers);
+  }
+  return byLength;
+}
+
+/**
+ * Finger tuples for `count` distinct pitches, low to high: rising for the right hand, falling for the
+ * left (the left hand mirrors the right), filtered by fixed fingers (null = free).
+ *
+ * @example
+ * candidateStates(2, "right", [null, null]).length // 10
+ * candidateStates(1, "left", [3]) // [[3]]
+ */
+export function candidateStates(count: number, hand: Hand, fixed: readonly (number | null)[]): (readonly number[])[] {
+  const base = COMBOS[count] ?? [];
+  const oriented = hand === "right" ? base : base.map((t) => [...t].reverse());
+  const ok = oriented.filter((t) => t.every((f, i) => fixed[i] == null || fixed[i] === f));
+  return ok.length > 0 ? ok : oriented;
+}
+
+function givenFinger(e: NoteEvent): number | null {
+  const f = e.fingering?.[0]?.finger;
+  return f !== undefined && f >= 1 && f <= 5 ? f : null;
+}
+
+/** Keep at most five pitches: the outer two and the inner ones spread evenly. */
+function keepFive(midis: number[]): number[] {
+  if (midis.length <= 5) return midis;
+  const picks = [0, 1, 2, 3, 4].map((i) => Math.round((i * (midis.length - 1)) / 4));
+  return picks.map((i) => midis[i]!);
+}
+
+/**
+ * Group one hand's events into slices. Rests are skipped; a note continuing a tie keeps the finger of
+ * the note it continues; grace notes come before the note they ornament, each on its own.
+ *
+ * @example
+ * buildSlices(events, "right").slices.length // number of distinct onsets with struck notes
+ */
+export function buildSlices(events: readonly NoteEvent[], hand: Hand): SliceSet {
+  const order = events.map((_, i) => i).filter((i) => events[i]!.pitch !== null);
+  const onset = order.map((i) => events[i]!.onset.valueOf());
+  const rank = new Map(order.map((i, k) => [i, k]));
+  order.sort((a, b) => {
+    const ea = events[a]!;
+    const eb = events[b]!;
+    const d = onset[rank.get(a)!]! - onset[rank.get(b)!]!;
+    if (d !== 0) return d;
+    if (!!ea.grace !== !!eb.grace) return ea.grace ? -1 : 1;
+    return a - b;
+  });
+  const tiedTo = new Map<number, number>();
+  const lastStruck = new Map<number, number>();
+  const groups: number[][] = [];
+  let prevKey: number | null = null;
+  for (const i of order) {
+    const e = events[i]!;
+    const midi = e.pitch!.midi;
+    if ((e.tie === "stop" || e.tie === "continue") && lastStruck.has(midi)) {
+      tiedTo.set(i, lastStruck.get(midi)!);
+      continue;
+    }
+    lastStruck.set(midi, i);
+    const key = e.onset.valueOf();
+    if (e.grace || prevKey === null || key !== prevKey || events[groups.at(-1)![0]!]!.grace) {
+      groups.push([i]);
+    } else {
+      groups.at(-1)!.push(i);
+    }
+    prevKey = key;
+  }
+  const slices = groups.map((g): Slice => {
+    const all = [...new Set(g.map((i) => events[i]!.pitch!.midi))].sort((a, b) => a - b);
+    const midis = keepFive(all);
+    const members = midis.map((m) => g.filter((i) => events[i]!.pitch!.midi === m));
+    const fixed = members.map((ms) => ms.map((i) => givenFinger(events[i]!)).find((f) => f !== null) ?? null);
+    return { midis, members, states: candidateStates(midis.length, hand, fixed), measure: events[g[0]!]!.measure };
+  });
+  return { slices, tiedTo };
+}
+
+/**
+ * The finger written in the score for an event (first mark), or null.
+ *
+ * @example
+ * scoreFinger(event) // 3 when the score shows "3"
+ */
+export function scoreFinger(e: NoteEvent): number | null {
+  return givenFinger(e);
+}
