@@ -1,0 +1,94 @@
+"use client";
+/** The layer over the engraved SVG: one cell per bar per staff for hover, selection, focus, heat and the playback cursor. */
+import { memo } from "react";
+import { staffInHand, type BarCell, type BarSelection } from "./bar-selection";
+import { barAtTime, cursorX, type BarBox, type ScoreLayout } from "./score-layout";
+
+export interface HeatMap {
+  right: readonly number[];
+  left: readonly number[];
+}
+
+interface Props {
+  layout: ScoreLayout;
+  offset: { x: number; y: number };
+  /** Vertical padding around each staff's box, in px. */
+  pad: number;
+  selection: BarSelection | null;
+  hover: BarCell | null;
+  focus: BarCell | null;
+  heat: HeatMap | null;
+  cursorTime: number | null;
+}
+
+function heatOf(heat: HeatMap | null, box: BarBox): number {
+  if (!heat) return 0;
+  const v = (box.staff === 1 ? heat.left : heat.right)[box.bar] ?? 0;
+  return Math.max(0, Math.min(1, v));
+}
+
+function isSelected(sel: BarSelection | null, box: BarBox): boolean {
+  return !!sel && box.bar >= sel.from && box.bar <= sel.to && staffInHand(box.staff, sel.hand);
+}
+
+function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, cursorTime }: Props) {
+  const current = cursorTime == null ? null : barAtTime(layout.bars, cursorTime);
+  const currentBoxes = current ? layout.boxes.filter((b) => b.bar === current.bar) : [];
+  let cursor: { x: number; top: number; bottom: number } | null = null;
+  if (current && currentBoxes.length > 0 && cursorTime != null) {
+    const right = Math.max(...currentBoxes.map((b) => b.x + b.w));
+    cursor = {
+      x: cursorX(current, cursorTime, right),
+      top: Math.min(...currentBoxes.map((b) => b.y)) - pad,
+      bottom: Math.max(...currentBoxes.map((b) => b.y + b.h)) + pad,
+    };
+  }
+  return (
+    <div
+      aria-hidden="true"
+      className="pointer-events-none absolute top-0 left-0"
+      style={{ transform: `translate(${offset.x}px, ${offset.y}px)` }}
+    >
+      {layout.boxes.map((box) => {
+        const selected = isSelected(selection, box);
+        const hovered = hover?.bar === box.bar && hover.staff === box.staff;
+        const focused = focus?.bar === box.bar && focus.staff === box.staff;
+        const h = heatOf(heat, box);
+        const playing = current?.bar === box.bar;
+        const background = selected
+          ? "rgba(37, 99, 235, 0.22)"
+          : playing
+            ? "rgba(16, 185, 129, 0.14)"
+            : h > 0.02
+              ? `rgba(234, 88, 12, ${(0.05 + 0.25 * h).toFixed(3)})`
+              : hovered
+                ? "rgba(100, 116, 139, 0.12)"
+                : "transparent";
+        return (
+          <div
+            key={`${box.bar}-${box.staff}`}
+            data-bar={box.bar}
+            data-staff={box.staff}
+            data-selected={selected ? "true" : undefined}
+            data-heat={h > 0 ? h.toFixed(2) : undefined}
+            className={[
+              "absolute rounded-sm",
+              selected ? "ring-2 ring-blue-600/70 ring-inset" : "",
+              focused ? "outline-2 outline-offset-1 outline-dashed outline-blue-800" : "",
+            ].join(" ")}
+            style={{ left: box.x, top: box.y - pad, width: box.w, height: box.h + 2 * pad, background }}
+          />
+        );
+      })}
+      {cursor && (
+        <div
+          data-cursor="true"
+          className="absolute w-0.5 rounded bg-emerald-600"
+          style={{ left: cursor.x - 1, top: cursor.top, height: cursor.bottom - cursor.top }}
+        />
+      )}
+    </div>
+  );
+}
+
+export const BarOverlay = memo(BarOverlayInner);

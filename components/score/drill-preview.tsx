@@ -1,0 +1,90 @@
+"use client";
+/**
+ * A small engraving of one drill, full width, without title. It loads only when scrolled near
+ * the viewport, and previews render one after another, so a grid of many stays responsive.
+ */
+import { useEffect, useRef, useState } from "react";
+import type { IOSMDOptions } from "opensheetmusicdisplay";
+import { useOsmd } from "./use-osmd";
+
+export interface DrillPreviewProps {
+  musicxml: string;
+  /** Accessible name of the engraving, e.g. the drill's title. */
+  label: string;
+  zoom?: number;
+  className?: string;
+}
+
+const PREVIEW_OPTIONS: IOSMDOptions = {
+  drawTitle: false,
+  drawSubtitle: false,
+  drawComposer: false,
+  drawLyricist: false,
+  drawCredits: false,
+  drawPartNames: false,
+  drawFingerings: true,
+  drawMeasureNumbers: false,
+  stretchLastSystemLine: true,
+  disableCursor: true,
+};
+
+/** Starts loading this far before the preview scrolls into view. */
+const ROOT_MARGIN = "300px 0px";
+
+export function DrillPreview({ musicxml, label, zoom = 0.75, className = "" }: DrillPreviewProps) {
+  const host = useRef<HTMLDivElement>(null);
+  const frame = useRef<HTMLDivElement>(null);
+  const [visible, setVisible] = useState(false);
+
+  useEffect(() => {
+    const el = frame.current;
+    if (!el) return;
+    if (typeof IntersectionObserver === "undefined") {
+      setVisible(true);
+      return;
+    }
+    const io = new IntersectionObserver(
+      (entries) => {
+        if (entries.some((e) => e.isIntersecting)) {
+          setVisible(true);
+          io.disconnect();
+        }
+      },
+      { rootMargin: ROOT_MARGIN },
+    );
+    io.observe(el);
+    return () => io.disconnect();
+  }, []);
+
+  const { status, error } = useOsmd(host, frame, {
+    musicxml,
+    zoom,
+    options: PREVIEW_OPTIONS,
+    enabled: visible,
+    withLayout: false,
+  });
+
+  return (
+    <div className={`w-full ${className}`}>
+      <figure
+        ref={frame}
+        role="img"
+        aria-label={label}
+        aria-busy={status !== "ready" && status !== "error"}
+        data-status={status}
+        data-testid="drill-preview"
+        className="relative min-h-24 w-full overflow-hidden rounded border border-stone-200 bg-white"
+      >
+        <div ref={host} className="w-full" />
+        {status !== "ready" && status !== "error" && (
+          <div className="absolute inset-0 m-3 animate-pulse rounded bg-stone-100" aria-hidden="true" />
+        )}
+        {status === "error" && (
+          <figcaption className="p-3 text-sm text-red-800">
+            Preview unavailable{error ? `: ${error}` : "."}
+          </figcaption>
+        )}
+      </figure>
+    </div>
+  );
+}
