@@ -3,7 +3,7 @@
  * duration, tie, voice, type, dot, accidental, time-modification, stem, notehead, staff, beam,
  * notations.
  */
-import type { NoteMark } from "./types";
+import type { NoteMark, Pitch } from "./types";
 import type { Piece } from "./write-pieces";
 import { toDivisions } from "./write-durations";
 import { el, empty } from "./write-xml";
@@ -18,6 +18,18 @@ export interface NoteContext {
   readonly tuplet: readonly ("start" | "stop")[];
   /** A rest filling the whole bar (`<rest measure="yes"/>`). */
   readonly measureRest?: boolean;
+}
+
+const STEP_SEMITONES = { C: 0, D: 2, E: 4, F: 5, G: 7, A: 9, B: 11 } as const;
+
+/**
+ * The octave to write: the model keeps the written octave and the sounding MIDI number (octave
+ * shifts applied); the writer writes no `<octave-shift>`, so it writes the sounding octave.
+ */
+function soundingOctave(p: Pitch): number {
+  const written = (p.octave + 1) * 12 + STEP_SEMITONES[p.step] + p.alter;
+  const diff = p.midi - written;
+  return diff !== 0 && diff % 12 === 0 ? p.octave + diff / 12 : p.octave;
 }
 
 const ARTICULATIONS: readonly NoteMark[] = ["accent", "staccato", "tenuto"];
@@ -35,7 +47,7 @@ export function noteXml(piece: Piece, ctx: NoteContext): string {
   if (ctx.chord) parts.push(empty("chord"));
   if (ev.pitch) {
     const alter = ev.pitch.alter !== 0 ? el("alter", ev.pitch.alter) : "";
-    parts.push(`<pitch>${el("step", ev.pitch.step)}${alter}${el("octave", ev.pitch.octave)}</pitch>`);
+    parts.push(`<pitch>${el("step", ev.pitch.step)}${alter}${el("octave", soundingOctave(ev.pitch))}</pitch>`);
   } else {
     parts.push(empty("rest", { measure: ctx.measureRest ? "yes" : undefined }));
   }
