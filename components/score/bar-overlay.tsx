@@ -56,13 +56,13 @@ function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, c
         const h = heatOf(heat, box);
         const playing = current?.bar === box.bar;
         const background = selected
-          ? "rgba(37, 99, 235, 0.22)"
+          ? "rgba(208, 138, 60, 0.3)"
           : playing
-            ? "rgba(16, 185, 129, 0.14)"
+            ? "rgba(86, 115, 94, 0.16)"
             : h > 0.02
-              ? `rgba(234, 88, 12, ${(0.05 + 0.25 * h).toFixed(3)})`
+              ? `rgba(165, 64, 44, ${(0.04 + 0.22 * h).toFixed(3)})`
               : hovered
-                ? "rgba(100, 116, 139, 0.12)"
+                ? "rgba(107, 95, 87, 0.1)"
                 : "transparent";
         return (
           <div
@@ -73,8 +73,8 @@ function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, c
             data-heat={h > 0 ? h.toFixed(2) : undefined}
             className={[
               "absolute rounded-sm",
-              selected ? "ring-2 ring-blue-600/70 ring-inset" : "",
-              focused ? "outline-2 outline-offset-1 outline-dashed outline-blue-800" : "",
+              selected ? "ring-2 ring-walnut/70 ring-inset" : "",
+              focused ? "outline-2 outline-offset-1 outline-dashed outline-walnut" : "",
             ].join(" ")}
             style={{ left: box.x, top: box.y - pad, width: box.w, height: box.h + 2 * pad, background }}
           />
@@ -83,7 +83,7 @@ function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, c
       {cursor && (
         <div
           data-cursor="true"
-          className="absolute w-0.5 rounded bg-emerald-600"
+          className="absolute w-0.5 rounded bg-sage"
           style={{ left: cursor.x - 1, top: cursor.top, height: cursor.bottom - cursor.top }}
         />
       )}

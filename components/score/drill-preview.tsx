@@ -73,14 +73,14 @@ export function DrillPreview({ musicxml, label, zoom = 0.75, className = "" }: D
         aria-busy={status !== "ready" && status !== "error"}
         data-status={status}
         data-testid="drill-preview"
-        className="relative min-h-24 w-full overflow-hidden rounded border border-stone-200 bg-white"
+        className="relative min-h-24 w-full overflow-hidden rounded border border-line bg-card"
       >
         <div ref={host} className="w-full" />
         {status !== "ready" && status !== "error" && (
           <div className="absolute inset-0 m-3 animate-pulse rounded bg-stone-100" aria-hidden="true" />
         )}
         {status === "error" && (
-          <figcaption className="p-3 text-sm text-red-800">
+          <figcaption className="p-3 text-sm text-madder">
             Preview unavailable{error ? `: ${error}` : "."}
           </figcaption>
         )}

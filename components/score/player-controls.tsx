@@ -18,9 +18,9 @@ interface Props {
 }
 
 const BTN =
-  "inline-flex min-h-11 min-w-11 items-center justify-center gap-1 rounded-md border px-3 text-sm font-medium focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-blue-600 disabled:opacity-40";
-const TOGGLE_ON = "border-blue-700 bg-blue-700 text-white";
-const TOGGLE_OFF = "border-stone-300 bg-white text-stone-800 hover:bg-stone-100";
+  "inline-flex min-h-11 min-w-11 items-center justify-center gap-1 rounded-md border px-3 text-sm font-medium focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-rosin disabled:opacity-40";
+const TOGGLE_ON = "border-walnut bg-walnut text-white";
+const TOGGLE_OFF = "border-line bg-card text-ink hover:bg-rosin-soft";
 
 export function PlayerControls(p: Props) {
   const tempoId = useId();
@@ -33,7 +33,7 @@ export function PlayerControls(p: Props) {
         aria-label={playing ? "Pause" : p.state === "loading" ? "Loading piano" : "Play"}
         disabled={p.state === "loading"}
         data-testid="player-play"
-        className={`${BTN} border-emerald-700 bg-emerald-700 px-4 text-white hover:bg-emerald-800`}
+        className={`${BTN} border-sage bg-sage px-4 text-white hover:brightness-110`}
       >
         <span aria-hidden="true">{playing ? "❚❚" : "▶"}</span>
         <span className="hidden sm:inline">{playing ? "Pause" : p.state === "loading" ? "Loading…" : "Play"}</span>
@@ -66,7 +66,7 @@ export function PlayerControls(p: Props) {
         <span aria-hidden="true">♩</span> Click
       </button>
       <div className="flex min-w-48 flex-1 items-center gap-2">
-        <label htmlFor={tempoId} className="text-sm whitespace-nowrap text-stone-800">
+        <label htmlFor={tempoId} className="text-sm whitespace-nowrap text-ink">
           Tempo <span className="tabular-nums">{p.bpm}</span> bpm
         </label>
         <input
@@ -78,10 +78,10 @@ export function PlayerControls(p: Props) {
           value={p.bpm}
           aria-valuetext={`${p.bpm} quarter notes per minute`}
           onChange={(e) => p.onBpm(Number(e.target.value))}
-          className="h-11 min-w-24 flex-1 accent-blue-700"
+          className="h-11 min-w-24 flex-1 accent-walnut"
         />
       </div>
-      <output aria-label="Position" data-testid="player-position" className="min-w-32 text-sm tabular-nums text-stone-700">
+      <output aria-label="Position" data-testid="player-position" className="min-w-32 text-sm tabular-nums text-muted">
         {p.readout}
       </output>
     </>

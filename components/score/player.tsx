@@ -148,7 +148,7 @@ export function Player({
       data-state={state}
       data-position={position.q.toFixed(3)}
       data-sound={sound ?? undefined}
-      className={`flex flex-wrap items-center gap-3 rounded-md border border-stone-200 bg-white p-2 ${className}`}
+      className={`flex flex-wrap items-center gap-3 rounded-md border border-line bg-card p-2 ${className}`}
     >
       <PlayerControls
         state={state}

@@ -9,7 +9,7 @@ const HANDS: { value: SelectionHand; label: string }[] = [
 ];
 
 const BUTTON =
-  "min-h-11 min-w-11 rounded-md border border-stone-300 px-3 text-sm font-medium focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-blue-600 disabled:opacity-40";
+  "min-h-11 min-w-11 rounded-md border border-line px-3 text-sm font-medium focus-visible:outline-3 focus-visible:outline-offset-2 focus-visible:outline-rosin disabled:opacity-40";
 
 export function HandChooser({ value, onChange }: { value: SelectionHand; onChange(hand: SelectionHand): void }) {
   return (
@@ -20,7 +20,7 @@ export function HandChooser({ value, onChange }: { value: SelectionHand; onChang
           type="button"
           aria-pressed={value === h.value}
           onClick={() => onChange(h.value)}
-          className={`${BUTTON} ${value === h.value ? "border-blue-700 bg-blue-700 text-white" : "bg-white text-stone-800 hover:bg-stone-100"}`}
+          className={`${BUTTON} ${value === h.value ? "border-walnut bg-walnut text-white" : "bg-card text-ink hover:bg-rosin-soft"}`}
         >
           {h.label}
         </button>
@@ -43,13 +43,13 @@ export function ZoomControls({
   const step = (dir: 1 | -1) => onChange(Math.round(Math.min(max, Math.max(min, zoom + dir * 0.1)) * 10) / 10);
   return (
     <div role="group" aria-label="Zoom" className="inline-flex items-center gap-1">
-      <button type="button" aria-label="Zoom out" disabled={zoom <= min} onClick={() => step(-1)} className={`${BUTTON} bg-white`}>
+      <button type="button" aria-label="Zoom out" disabled={zoom <= min} onClick={() => step(-1)} className={`${BUTTON} bg-card`}>
         −
       </button>
       <output aria-live="polite" className="w-14 text-center text-sm tabular-nums">
         {Math.round(zoom * 100)}%
       </output>
-      <button type="button" aria-label="Zoom in" disabled={zoom >= max} onClick={() => step(1)} className={`${BUTTON} bg-white`}>
+      <button type="button" aria-label="Zoom in" disabled={zoom >= max} onClick={() => step(1)} className={`${BUTTON} bg-card`}>
         +
       </button>
     </div>

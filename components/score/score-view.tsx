@@ -186,7 +186,7 @@ export function ScoreView({
         )}
         <ZoomControls zoom={zoom} min={ZOOM_MIN} max={ZOOM_MAX} onChange={setZoom} />
       </div>
-      <div className="relative w-full overflow-auto rounded-md border border-stone-200 bg-white">
+      <div className="relative w-full overflow-auto rounded-md border border-line bg-card">
         <div
           ref={frame}
           tabIndex={selectable ? 0 : -1}
@@ -196,7 +196,7 @@ export function ScoreView({
           aria-describedby={helpId}
           aria-busy={status === "loading"}
           data-testid="score-frame"
-          className="relative min-h-40 touch-pan-y outline-none select-none focus-visible:ring-4 focus-visible:ring-blue-500/60 focus-visible:ring-inset"
+          className="relative min-h-40 touch-pan-y outline-none select-none focus-visible:ring-4 focus-visible:ring-rosin/70 focus-visible:ring-inset"
           onPointerDown={onPointerDown}
           onPointerMove={onPointerMove}
           onPointerUp={onPointerUp}
@@ -222,7 +222,7 @@ export function ScoreView({
           )}
           {(status === "loading" || status === "idle") && <ScoreSkeleton />}
           {status === "error" && (
-            <p role="alert" className="p-4 text-sm text-red-800">
+            <p role="alert" className="p-4 text-sm text-madder">
               This piece could not be engraved{error ? `: ${error}` : "."}
             </p>
           )}

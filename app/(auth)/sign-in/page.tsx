@@ -1,0 +1,19 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { SignInForm } from "@/components/auth/sign-in-form";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+export default function SignInPage() {
+  return (
+    <>
+      <h1 className="text-2xl font-semibold">Sign in</h1>
+      <p className="mt-1 mb-6 text-sm text-muted">Teachers and students sign in here.</p>
+      <SignInForm />
+      <p className="mt-6 text-center text-sm text-muted">
+        New teacher?{" "}
+        <Link href="/sign-up" className="font-bold text-walnut underline">Create your studio</Link>
+      </p>
+    </>
+  );
+}

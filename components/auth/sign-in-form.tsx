@@ -1,0 +1,42 @@
+"use client";
+import { useState } from "react";
+import { authClient } from "@/lib/auth-client";
+import { Button } from "../ui/button";
+import { Field, FormMessage } from "../ui/field";
+
+export function SignInForm() {
+  const [message, setMessage] = useState<string | null>(null);
+  const [pending, setPending] = useState(false);
+
+  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    setPending(true);
+    setMessage(null);
+    const { error } = await authClient.signIn.email({
+      email: String(form.get("email") ?? "").trim(),
+      password: String(form.get("password") ?? ""),
+    });
+    if (error) {
+      setPending(false);
+      setMessage(
+        error.status === 429
+          ? "Too many attempts. Please wait a minute and try again."
+          : "That e-mail and password do not match an account.",
+      );
+      return;
+    }
+    window.location.assign("/go");
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="flex flex-col gap-4">
+      <FormMessage message={message} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" required />
+      <Field label="Password" name="password" type="password" autoComplete="current-password" required />
+      <Button type="submit" disabled={pending} className="mt-2 w-full">
+        {pending ? "Signing in…" : "Sign in"}
+      </Button>
+    </form>
+  );
+}
