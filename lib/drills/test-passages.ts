@@ -118,3 +118,25 @@ export function makePassage(spec: PassageSpec): Passage {
     staffOf: { right: 1, left: 2 },
   };
 }
+
+/**
+ * A drill staff as text, one item per sonority: `"C4+E4:1/2"`, rests as `"r:1"`; marks after `!`.
+ *
+ * @example
+ * drillText(drill.score.events, 1); // ["C4+E4+G4:2", "D4+F4+A4:2"]
+ */
+export function drillText(events: readonly NoteEvent[], staff = 1): string[] {
+  const out: string[] = [];
+  for (const e of events.filter((x) => x.staff === staff)) {
+    const name = e.pitch ? `${e.pitch.step}${e.pitch.alter > 0 ? "#".repeat(e.pitch.alter) : "b".repeat(-e.pitch.alter)}${e.pitch.octave}` : "r";
+    if (e.chord) {
+      const [head, dur] = out[out.length - 1].split(":");
+      out[out.length - 1] = `${head}+${name}:${dur}`;
+    } else out.push(`${name}:${e.duration.toFraction()}${e.marks?.length ? `!${e.marks.join(",")}` : ""}`);
+  }
+  return out.map((s) => {
+    const [body, marks] = s.split("!");
+    const [head, dur] = body.split(":");
+    return marks ? `${head}:${dur}!${marks}` : `${head}:${dur}`;
+  });
+}

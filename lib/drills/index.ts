@@ -1,0 +1,78 @@
+/**
+ * The drill library: the registry of drill families, one call that runs them on a passage, and
+ * suggestions from a knot's problem tags. Also re-exports the fingering and hand models.
+ */
+import type { Passage } from "../score/types";
+import type { Drill, DrillFamily, HandProfile } from "./types";
+import { makeContext } from "./build";
+import { blocking } from "./families/blocking";
+
+export type { Drill, DrillContext, DrillFamily, DrillWarning, FamilyResult, HandProfile, ProblemTag, SpanReport } from "./types";
+export { PROBLEM_TAGS } from "./types";
+export { suggestFamilies, SUGGESTIONS } from "./suggest";
+export { mulberry32 } from "./rng";
+export { makeContext } from "./build";
+export { estimateFingering } from "./fingering";
+export { DEFAULT_PROFILE, keyDistanceMm, profileFromInches, spanOf } from "./hand";
+export { difficultyMap, hardestBars } from "./difficulty";
+
+/**
+ * Every drill family by id, in the order a teacher sees them.
+ *
+ * @example
+ * families["blocking"].options.parse({}); // the default options
+ */
+export const families: Readonly<Record<string, DrillFamily>> = Object.fromEntries(
+  ([blocking] as DrillFamily[]).map((f) => [f.id, f]),
+);
+
+export interface GenerateOptions {
+  /** Family ids to run; default all. */
+  readonly families?: readonly string[];
+  /** Options per family id (raw input, validated by each family's schema). */
+  readonly options?: Readonly<Record<string, unknown>>;
+  readonly profile?: HandProfile;
+  readonly seed?: number;
+  /** Keep generators that move notes inside the profile (default true). */
+  readonly safety?: boolean;
+}
+
+export interface GenerateResult {
+  readonly drills: Drill[];
+  /** Families that wrote nothing for this passage, and why. */
+  readonly skipped: { readonly family: string; readonly reason: string }[];
+}
+
+function hashId(id: string): number {
+  let h = 2166136261;
+  for (const ch of id) h = Math.imul(h ^ ch.charCodeAt(0), 16777619);
+  return h >>> 0;
+}
+
+/**
+ * Run the chosen families (default: all) on a passage. Returns the drills and, rather than
+ * failing, a `skipped` list naming each family that does not apply and why. Each family draws
+ * from its own random source derived from `seed`, so adding a family never changes the others.
+ * Invalid options throw the schema's `ZodError`.
+ *
+ * @example
+ * const { drills, skipped } = generateDrills(passage, { families: ["blocking"], seed: 3 });
+ */
+export function generateDrills(passage: Passage, opts: GenerateOptions = {}): GenerateResult {
+  const ids = opts.families ?? Object.keys(families);
+  const drills: Drill[] = [];
+  const skipped: { family: string; reason: string }[] = [];
+  for (const id of ids) {
+    const family = families[id];
+    if (!family) {
+      skipped.push({ family: id, reason: "There is no drill family with this name." });
+      continue;
+    }
+    const options = family.options.parse(opts.options?.[id] ?? {});
+    const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety });
+    const result = family.generate(passage, options, ctx);
+    drills.push(...result.drills);
+    if (result.drills.length === 0) skipped.push({ family: id, reason: result.skipped ?? "No drill of this family fits the passage." });
+  }
+  return { drills, skipped };
+}
