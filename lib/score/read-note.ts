@@ -133,7 +133,7 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
   } else if (n.unpitched) warn(raw, "unpitched", "Unpitched notes are read as rests", c.measureIndex, "unpitched");
   let dynamic = n.dynamic;
   let words: string | undefined;
-  if (pitch) {
+  if (pitch && !n.grace) {
     dynamic ??= c.pendingDynamic.get(n.staff);
     words = c.pendingWords.get(n.staff);
     c.pendingDynamic.delete(n.staff);

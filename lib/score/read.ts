@@ -6,7 +6,7 @@ import { isZip, unpackMxl } from "./mxl";
 import { buildScore } from "./read-build";
 import { parsePartwise } from "./read-partwise";
 import { DEFAULT_LIMITS, type ReadOptions } from "./read-types";
-import { assertSafeXml } from "./sanitize";
+import { assertSafeXml, cleanXml } from "./sanitize";
 import type { Score, ScoreWarning } from "./types";
 
 export type { ReadOptions } from "./read-types";
@@ -32,6 +32,21 @@ export function readScore(input: string | Uint8Array, options: ReadOptions = {})
   const raw = parsePartwise(text, limits);
   const score = buildScore(raw);
   return { score, warnings: raw.warnings };
+}
+
+/**
+ * The cleaned MusicXML text of an upload — the only copy ever stored or sent to a browser. The file is
+ * first read in full (so hostile or unusable files throw the same `ScoreError`s as `readScore`), then
+ * re-serialised without DOCTYPE, comments and processing instructions, entities decoded.
+ *
+ * @example
+ * sanitizeScore(mxlBytes).startsWith('<?xml version="1.0" encoding="UTF-8"?>'); // true
+ */
+export function sanitizeScore(input: string | Uint8Array, options: ReadOptions = {}): string {
+  const text = scoreText(input);
+  assertSafeXml(text);
+  parsePartwise(text, { ...DEFAULT_LIMITS, ...options });
+  return cleanXml(text);
 }
 
 /**

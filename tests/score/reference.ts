@@ -39,7 +39,10 @@ export interface VerovioToolkitLike {
 
 /** Start verovio once per test file (about half a second). */
 export async function loadVerovio(): Promise<VerovioToolkitLike> {
+  // verovio's wasm/esm entry points ship no type declarations.
+  // @ts-ignore
   const { default: createVerovioModule } = await import("verovio/wasm");
+  // @ts-ignore
   const { VerovioToolkit } = await import("verovio/esm");
   return new VerovioToolkit(await createVerovioModule()) as unknown as VerovioToolkitLike;
 }
