@@ -1,0 +1,30 @@
+import { describe, expect, test } from "vitest";
+import { makeContext } from "../build";
+import { drillText, makePassage } from "../test-passages";
+import { liftRests, liftRestsOptions } from "./lift-rests";
+
+describe("lift-rests", () => {
+  test("options parse with defaults", () => {
+    expect(liftRestsOptions.parse({})).toEqual({ groupBy: "beat", rest: "eighth" });
+  });
+
+  test("a rest of the chosen length after every group; the last bar is completed with rests", () => {
+    const p = makePassage({ right: "C4/8 E4/8 D4/8 F4/8 E4/8 G4/8 F4/8 A4/8" });
+    const { drills } = liftRests.generate(p, liftRestsOptions.parse({ rest: "quarter" }), makeContext());
+    // Four beats of two eighths, each followed by a quarter rest: 4 × 2 = 8 quarters, two 4/4 bars.
+    expect(drillText(drills[0].score.events)).toEqual([
+      "C4:1/2", "E4:1/2", "r:1", "D4:1/2", "F4:1/2", "r:1",
+      "E4:1/2", "G4:1/2", "r:1", "F4:1/2", "A4:1/2", "r:1",
+    ]);
+    expect(drills[0].score.measures).toHaveLength(2);
+  });
+
+  test("an eighth rest in 4/4 leaves the bar to be completed with rests", () => {
+    const p = makePassage({ right: "C4/4 D4/4 E4/4 F4/4" });
+    const { drills } = liftRests.generate(p, liftRestsOptions.parse({}), makeContext());
+    const text = drillText(drills[0].score.events);
+    expect(text.filter((t) => !t.startsWith("r"))).toEqual(["C4:1", "D4:1", "E4:1", "F4:1"]);
+    // 4 quarters + 4 eighth rests = 6 quarters, completed to 8 (two bars).
+    expect(drills[0].score.measures).toHaveLength(2);
+  });
+});
