@@ -55,9 +55,14 @@ const SAME_FINGER: PairSpan = row([0, 0, 0, 0, 0, 0]);
  * pairSpan(5, 1).maxPrac // 15
  */
 export function pairSpan(a: number, b: number): PairSpan {
-  if (a === b) return SAME_FINGER;
-  return FINGER_SPANS[`${Math.min(a, b)}-${Math.max(a, b)}`]!;
+  return SPAN_GRID[a * 6 + b] ?? SAME_FINGER;
 }
+
+/** Rows by finger pair, indexed a × 6 + b, for the search's inner loop. */
+const SPAN_GRID: readonly (PairSpan | undefined)[] = Array.from({ length: 36 }, (_, k) => {
+  const a = Math.floor(k / 6), b = k % 6;
+  return a === b ? SAME_FINGER : FINGER_SPANS[`${Math.min(a, b)}-${Math.max(a, b)}`];
+});
 
 /**
  * Interval from note `a` to note `b` in the hand's orientation: semitones upwards for the right hand,
@@ -108,6 +113,19 @@ export function emptyCosts(): RuleCosts {
     weakFinger: 0, threeFourFive: 0, threeToFour: 0, fourOnBlack: 0, thumbOnBlack: 0,
     fiveOnBlack: 0, thumbPassing: 0, sameFinger: 0, overPractical: 0,
   };
+}
+
+/**
+ * Reset a tally to zero in place (the search reuses one tally instead of allocating).
+ *
+ * @example
+ * clearCosts(tally).stretch // 0
+ */
+export function clearCosts(c: RuleCosts): RuleCosts {
+  c.stretch = 0; c.smallSpan = 0; c.largeSpan = 0; c.positionChangeCount = 0; c.positionChangeSize = 0;
+  c.weakFinger = 0; c.threeFourFive = 0; c.threeToFour = 0; c.fourOnBlack = 0; c.thumbOnBlack = 0;
+  c.fiveOnBlack = 0; c.thumbPassing = 0; c.sameFinger = 0; c.overPractical = 0;
+  return c;
 }
 
 /**

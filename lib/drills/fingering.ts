@@ -11,6 +11,7 @@ import type { Hand, NoteEvent } from "../score/types";
 import { buildSlices, scoreFinger, type Slice } from "./fingering-slices";
 import {
   chordPracticalPenalty,
+  clearCosts,
   emptyCosts,
   noteCosts,
   pairCosts,
@@ -38,6 +39,8 @@ export interface FingeringResult {
 /** Line notes of a slice: the lowest (0) and the highest (1) kept pitch. */
 const lineIndex = (s: Slice, line: 0 | 1): number => (line === 0 ? 0 : s.midis.length - 1);
 
+const chordScratch = emptyCosts();
+
 /** Rules on one slice alone: note rules with neighbour colours, and spans inside a chord. */
 function sliceCosts(slices: readonly Slice[], s: number, state: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
   const cur = slices[s]!;
@@ -50,7 +53,7 @@ function sliceCosts(slices: readonly Slice[], s: number, state: readonly number[
     noteCosts(cur.midis[j]!, state[j]!, p, n, model, into);
   }
   for (let j = 0; j + 1 < cur.midis.length; j++) {
-    const chord = emptyCosts();
+    const chord = clearCosts(chordScratch);
     pairCosts(cur.midis[j]!, state[j]!, cur.midis[j + 1]!, state[j + 1]!, hand, model, chord);
     into.stretch += chord.stretch;
     into.smallSpan += chord.smallSpan;
@@ -105,16 +108,41 @@ function chordTieBreak(state: readonly number[]): number {
   return 1e-4 * (lo - 1 + (5 - hi));
 }
 
+/** `rank` of the pair rules between two slices, summed into `into` without allocating. */
+function linkRank(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): number {
+  pairCosts(a.midis[0]!, fa[0]!, b.midis[0]!, fb[0]!, hand, model, into);
+  if (a.midis.length === 1 && b.midis.length === 1) return rank(into);
+  const i = a.midis.length - 1, j = b.midis.length - 1;
+  pairCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, hand, model, into);
+  return 0.5 * rank(into);
+}
+
+const trioScratch = emptyCosts();
+
+/** `rank` of the trio rules without allocating: only rules 4, 5 and 7 touch the scratch tally. */
+function trioRank(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], c: Slice, fc: readonly number[], hand: Hand, model: FingeringModel): number {
+  const single = a.midis.length === 1 && b.midis.length === 1 && c.midis.length === 1;
+  const t = trioScratch;
+  t.positionChangeCount = 0; t.positionChangeSize = 0; t.threeFourFive = 0;
+  const i0 = 0, j0 = 0, k0 = 0;
+  trioCosts(a.midis[i0]!, fa[i0]!, b.midis[j0]!, fb[j0]!, c.midis[k0]!, fc[k0]!, hand, model, t);
+  if (!single) {
+    const i = a.midis.length - 1, j = b.midis.length - 1, k = c.midis.length - 1;
+    trioCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, c.midis[k]!, fc[k]!, hand, model, t);
+  }
+  const w = single ? 1 : 0.5;
+  return w * (t.positionChangeCount * (1 + 1e-3) + t.positionChangeSize + t.threeFourFive);
+}
+
 /** Best state per slice by second-order Viterbi. */
 function search(slices: readonly Slice[], hand: Hand, model: FingeringModel): number[] {
   const n = slices.length;
   if (n === 0) return [];
   const scratch = emptyCosts();
-  const reset = () => { for (const k of Object.keys(scratch) as (keyof RuleCosts)[]) scratch[k] = 0; };
-  const stat = slices.map((s, i) => s.states.map((st) => { reset(); sliceCosts(slices, i, st, hand, model, scratch); return rank(scratch) + chordTieBreak(st); }));
+  const stat = slices.map((s, i) => s.states.map((st) => { clearCosts(scratch); sliceCosts(slices, i, st, hand, model, scratch); return rank(scratch) + chordTieBreak(st); }));
   if (n === 1) return [argmin(stat[0]!)];
   const link = slices.slice(0, -1).map((a, i) => a.states.map((fa) => slices[i + 1]!.states.map((fb) => {
-    reset(); linkCosts(a, fa, slices[i + 1]!, fb, hand, model, scratch); return rank(scratch);
+    clearCosts(scratch); return linkRank(a, fa, slices[i + 1]!, fb, hand, model, scratch);
   })));
   // v[a][b]: best cost of a path whose last two slices take states a (s-1) and b (s).
   let v = slices[0]!.states.map((_, a) => slices[1]!.states.map((_, b) => stat[0]![a]! + stat[1]![b]! + link[0]![a]![b]!));
@@ -130,8 +158,7 @@ function search(slices: readonly Slice[], hand: Hand, model: FingeringModel): nu
         for (let a = 0; a < A.states.length; a++) {
           const base = v[a]![b]!;
           if (base >= best) continue;
-          reset(); trioLinkCosts(A, A.states[a]!, B, B.states[b]!, C, C.states[c]!, hand, model, scratch);
-          const total = base + rank(scratch);
+          const total = base + trioRank(A, A.states[a]!, B, B.states[b]!, C, C.states[c]!, hand, model);
           if (total < best) { best = total; arg = a; }
         }
         nv[b]![c] = best + step;
