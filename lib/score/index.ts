@@ -17,3 +17,5 @@ export { mergeTies } from "./ties";
 export { q, fromDivisions, barLength, maxTime, compareTime, toQuarters, ZERO } from "./time";
 export { midiOf, makePitch, pitchName, isStep, octaveShiftSemitones, STEP_SEMITONES } from "./pitch";
 export * from "./write";
+export * from "./performance";
+export * from "./midi";
