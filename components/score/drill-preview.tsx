@@ -30,6 +30,8 @@ const PREVIEW_OPTIONS: IOSMDOptions = {
 
 /** Starts loading this far before the preview scrolls into view. */
 const ROOT_MARGIN = "300px 0px";
+/** A preview must stay near the viewport this long (ms), so layout shifts while a page loads do not wake them all. */
+const SETTLE_MS = 250;
 
 export function DrillPreview({ musicxml, label, zoom = 0.75, className = "" }: DrillPreviewProps) {
   const host = useRef<HTMLDivElement>(null);
@@ -43,17 +45,23 @@ export function DrillPreview({ musicxml, label, zoom = 0.75, className = "" }: D
       setVisible(true);
       return;
     }
+    let timer: ReturnType<typeof setTimeout> | undefined;
     const io = new IntersectionObserver(
       (entries) => {
-        if (entries.some((e) => e.isIntersecting)) {
+        clearTimeout(timer);
+        if (!entries.some((e) => e.isIntersecting)) return;
+        timer = setTimeout(() => {
           setVisible(true);
           io.disconnect();
-        }
+        }, SETTLE_MS);
       },
       { rootMargin: ROOT_MARGIN },
     );
     io.observe(el);
-    return () => io.disconnect();
+    return () => {
+      clearTimeout(timer);
+      io.disconnect();
+    };
   }, []);
 
   const { status, error } = useOsmd(host, frame, {
@@ -73,7 +81,7 @@ export function DrillPreview({ musicxml, label, zoom = 0.75, className = "" }: D
         aria-busy={status !== "ready" && status !== "error"}
         data-status={status}
         data-testid="drill-preview"
-        className="relative min-h-24 w-full overflow-hidden rounded border border-line bg-card"
+        className="relative min-h-32 w-full overflow-hidden rounded border border-line bg-card"
       >
         <div ref={host} className="w-full" />
         {status !== "ready" && status !== "error" && (

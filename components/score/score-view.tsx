@@ -25,7 +25,7 @@ import { useOsmd } from "./use-osmd";
 
 export interface ScoreViewProps {
   musicxml: string;
-  /** Initial zoom (1 = 100 %). */
+  /** Initial zoom (1 = 100 %); by default 100 %, or 70 % on a phone-sized screen. */
   zoom?: number;
   selection?: BarSelection | null;
   onSelectionChange?(sel: BarSelection | null): void;
@@ -53,10 +53,12 @@ const OSMD_OPTIONS: IOSMDOptions = {
 const GRID_KEYS = new Set(["ArrowLeft", "ArrowRight", "ArrowUp", "ArrowDown", "Home", "End"]);
 const ZOOM_MIN = 0.5;
 const ZOOM_MAX = 2;
+const PHONE_WIDTH = 640;
+const PHONE_ZOOM = 0.7;
 
 export function ScoreView({
   musicxml,
-  zoom: initialZoom = 1,
+  zoom: initialZoom,
   selection: selectionProp = null,
   onSelectionChange,
   onConfirm,
@@ -69,7 +71,10 @@ export function ScoreView({
 }: ScoreViewProps) {
   const host = useRef<HTMLDivElement>(null);
   const frame = useRef<HTMLDivElement>(null);
-  const [zoom, setZoom] = useState(initialZoom);
+  const [zoom, setZoom] = useState(initialZoom ?? 1);
+  useEffect(() => {
+    if (initialZoom === undefined && window.innerWidth < PHONE_WIDTH) setZoom(PHONE_ZOOM);
+  }, [initialZoom]);
   const { status, error, layout, offset } = useOsmd(host, frame, { musicxml, zoom, options: OSMD_OPTIONS });
   const [sel, setSel] = useState<BarSelection | null>(selectionProp);
   const [hover, setHover] = useState<BarCell | null>(null);
@@ -196,7 +201,7 @@ export function ScoreView({
           aria-describedby={helpId}
           aria-busy={status === "loading"}
           data-testid="score-frame"
-          className="relative min-h-40 touch-pan-y outline-none select-none focus-visible:ring-4 focus-visible:ring-rosin/70 focus-visible:ring-inset"
+          className={`relative touch-pan-y ${status === "ready" ? "min-h-40" : "min-h-[60vh]"} outline-none select-none focus-visible:ring-4 focus-visible:ring-rosin/70 focus-visible:ring-inset`}
           onPointerDown={onPointerDown}
           onPointerMove={onPointerMove}
           onPointerUp={onPointerUp}

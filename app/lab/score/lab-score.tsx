@@ -4,7 +4,10 @@ import { useMemo, useState } from "react";
 import type { BarSelection } from "@/components/score/bar-selection";
 import type { BarMark, PlaybackEvent } from "@/components/score/playback-timeline";
 
-const ScoreView = dynamic(() => import("@/components/score/score-view").then((m) => m.ScoreView), { ssr: false });
+const ScoreView = dynamic(() => import("@/components/score/score-view").then((m) => m.ScoreView), {
+  ssr: false,
+  loading: () => <div className="min-h-[60vh] animate-pulse rounded-md bg-card" />,
+});
 const Player = dynamic(() => import("@/components/score/player").then((m) => m.Player), { ssr: false });
 const DrillPreview = dynamic(() => import("@/components/score/drill-preview").then((m) => m.DrillPreview), {
   ssr: false,
