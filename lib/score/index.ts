@@ -19,3 +19,4 @@ export { midiOf, makePitch, pitchName, isStep, octaveShiftSemitones, STEP_SEMITO
 export * from "./write";
 export * from "./performance";
 export * from "./midi";
+export { writeMxl } from "./write-mxl";
