@@ -23,8 +23,13 @@ export function beatLength(time: TimeSignature): Fraction {
   return new Fraction(4, time.beatType);
 }
 
-/** Offset of an onset from the start of its (full-length) bar, counting a pickup from its missing part. */
-function placeInBar(passage: Passage, onset: Fraction): { bar: number; offset: Fraction } {
+/**
+ * Offset of an onset from the start of its (full-length) bar, counting a pickup from its missing part.
+ *
+ * @example
+ * placeInBar(passage, new Fraction(5)); // { bar: 1, offset: 1 } in 4/4
+ */
+export function placeInBar(passage: Passage, onset: Fraction): { bar: number; offset: Fraction } {
   const m = [...passage.measures].reverse().find((x) => x.start.compare(onset) <= 0) ?? passage.measures[0];
   const full = barLength(m.time);
   const missing = m.length.compare(full) < 0 && m.index === passage.measures[0].index ? full.sub(m.length) : new Fraction(0);

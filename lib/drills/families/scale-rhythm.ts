@@ -1,0 +1,152 @@
+/**
+ * Scale rhythm: the passage's rhythm pattern (its subdivision of the beat, tuplets included)
+ * played on a two-octave scale of its key, up and down, with standard scale fingering — the same
+ * motion problem without the notes of the piece.
+ */
+import Fraction from "fraction.js";
+import { Scale } from "tonal";
+import { z } from "zod";
+import type { Hand, Passage } from "../../score/types";
+import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
+import { buildDrill, passageHands, restSlot, type Slot } from "../build";
+import { beatLength, groupSonorities, placeInBar } from "../groups";
+import { keyTonic, pitchFromName } from "../spell";
+
+export const scaleRhythmOptions = z.object({
+  /** Minor keys use this form of the minor scale. */
+  minorForm: z.enum(["natural", "harmonic", "melodic"]).default("harmonic"),
+});
+export type ScaleRhythmOptions = z.output<typeof scaleRhythmOptions>;
+
+/** One beat's rhythm: durations from the beat's start, and the tuplet they are written in. */
+export interface BeatPattern {
+  readonly durations: readonly Fraction[];
+  readonly tuplet?: { readonly actual: number; readonly normal: number };
+}
+
+/**
+ * The most common beat pattern of a hand with at least two notes in the beat (ties keep the first
+ * seen); one note per beat when the hand never divides the beat.
+ *
+ * @example
+ * beatPattern(passage, "right").durations.map(String); // ["0.5", "0.5"] for running eighths
+ */
+export function beatPattern(passage: Passage, hand: Hand, ctx: DrillContext): BeatPattern {
+  const beat = beatLength(passage.time);
+  const counts = new Map<string, { n: number; pattern: BeatPattern }>();
+  for (const g of groupSonorities(passage, hand, "beat", ctx.profile)) {
+    const { offset } = placeInBar(passage, g[0].onset);
+    if (!offset.mod(beat).equals(0) || g.length < 2) continue;
+    const end = g[0].onset.add(beat);
+    const durations = g.map((s, i) => (g[i + 1]?.onset ?? end).sub(s.onset));
+    const tuplet = g[0].notes[0]?.written.tuplet ?? undefined;
+    const key = durations.map((d) => d.toFraction()).join(" ") + (tuplet ? ` ${tuplet.actual}:${tuplet.normal}` : "");
+    const entry = counts.get(key) ?? { n: 0, pattern: { durations, ...(tuplet ? { tuplet } : {}) } };
+    counts.set(key, { ...entry, n: entry.n + 1 });
+  }
+  let best: { n: number; pattern: BeatPattern } | undefined;
+  for (const c of counts.values()) if (!best || c.n > best.n) best = c;
+  return best?.pattern ?? { durations: [beat] };
+}
+
+/**
+ * Standard two-octave scale fingering, ascending, for the keys that share the common patterns
+ * (common practice; from memory): C, G, D, A, E (major and minor) — right hand 123 1234 …, left
+ * hand 54321 321 …; B major left hand 4321 4321 …; F major right hand 1234 123 …. Other keys get
+ * the estimated fingering.
+ *
+ * @example
+ * scaleFingering("C", "major", "right"); // [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5]
+ */
+export function scaleFingering(tonic: string, mode: string, hand: Hand): number[] | null {
+  const common = ["C", "G", "D", "A", "E"].includes(tonic);
+  const rightC = [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5];
+  const leftC = [5, 4, 3, 2, 1, 3, 2, 1, 4, 3, 2, 1, 3, 2, 1];
+  if (hand === "right") {
+    if (common || (tonic === "B" && mode === "major")) return rightC;
+    if (tonic === "F" && mode === "major") return [1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 4];
+    return null;
+  }
+  if (common || (tonic === "F" && mode === "major")) return leftC;
+  if (tonic === "B" && mode === "major") return [4, 3, 2, 1, 4, 3, 2, 1, 3, 2, 1, 4, 3, 2, 1];
+  return null;
+}
+
+/**
+ * The scale of the passage's key, two octaves up and back down (29 notes), as tonal spells it.
+ *
+ * @example
+ * twoOctaveScale({ fifths: 0, mode: "major" }, 4, "harmonic").slice(0, 3); // ["C4", "D4", "E4"]
+ */
+export function twoOctaveScale(key: Passage["key"], octave: number, minorForm: ScaleRhythmOptions["minorForm"]): string[] {
+  const tonic = keyTonic(key);
+  const type = key.mode === "minor" ? (minorForm === "natural" ? "minor" : `${minorForm} minor`) : "major";
+  // Melodic minor comes down as natural minor (common practice).
+  const up = Scale.rangeOf(`${tonic} ${type}`)(`${tonic}${octave}`, `${tonic}${octave + 2}`) as string[];
+  const downScale = type === "melodic minor" ? `${tonic} minor` : `${tonic} ${type}`;
+  const down = (Scale.rangeOf(downScale)(`${tonic}${octave + 2}`, `${tonic}${octave}`) as string[]).slice(1);
+  return [...up, ...down];
+}
+
+function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options: ScaleRhythmOptions): Slot[] {
+  const names = twoOctaveScale(passage.key, hand === "right" ? 4 : 2, options.minorForm);
+  const fingers = scaleFingering(keyTonic(passage.key), passage.key.mode, hand);
+  const fingerAt = (i: number) => (fingers ? (i < 15 ? fingers[i] : fingers[28 - i]) : undefined);
+  const slots: Slot[] = [];
+  const tuplet = pattern.tuplet;
+  let k = 0;
+  for (; k < names.length; k++) {
+    const f = fingerAt(k);
+    slots.push({
+      duration: pattern.durations[k % pattern.durations.length],
+      notes: [{ pitch: pitchFromName(names[k]), ...(f ? { fingering: [{ finger: f }] } : {}) }],
+      ...(tuplet ? { tuplet } : {}),
+    });
+  }
+  for (; k % pattern.durations.length !== 0; k++) slots.push(restSlot(pattern.durations[k % pattern.durations.length], tuplet));
+  return slots;
+}
+
+/**
+ * One drill per hand (and hands together when the passage has both): the scale in the hand's rhythm.
+ *
+ * @example
+ * scaleRhythm.generate(passage, scaleRhythmOptions.parse({}), makeContext()).drills[0].title;
+ */
+export function generateScaleRhythm(passage: Passage, options: ScaleRhythmOptions, ctx: DrillContext): FamilyResult {
+  const hands = passageHands(passage).filter((h) => passage.sonorities[h].length > 0);
+  if (hands.length === 0) return { drills: [], skipped: "The passage has no notes to take a rhythm from." };
+  const tonic = keyTonic(passage.key);
+  const keyName = `${tonic} ${passage.key.mode === "minor" ? "minor" : "major"}`;
+  const drills: Drill[] = [];
+  const sets: (Hand | "both")[] = hands.length === 2 ? ["right", "left", "both"] : hands;
+  for (const set of sets) {
+    const own: Hand[] = set === "both" ? ["right", "left"] : [set];
+    const pattern = beatPattern(passage, own[0], ctx);
+    const segment = Object.fromEntries(own.map((h) => [h, scaleSlots(passage, h, pattern, options)]));
+    drills.push(
+      buildDrill(
+        passage,
+        {
+          family: "scale-rhythm",
+          variant: set === "both" ? "hands-together" : `${set}-hand`,
+          title: `${keyName} scale in the passage's rhythm${set === "both" ? ", hands together" : hands.length > 1 ? ` (${set} hand)` : ""}`,
+          teacherNote: "The scale carries the passage's exact subdivision, so the rhythm is secured on familiar notes first.",
+          studentNote: "Play the scale two octaves up and down in this rhythm, evenly, with the fingering shown.",
+          hands: set,
+          segments: [segment],
+        },
+        ctx,
+      ),
+    );
+  }
+  return { drills };
+}
+
+export const scaleRhythm: DrillFamily<typeof scaleRhythmOptions> = {
+  id: "scale-rhythm",
+  label: "Scale in rhythm",
+  describe: "The passage's rhythm on a two-octave scale of its key, up and down.",
+  options: scaleRhythmOptions,
+  generate: generateScaleRhythm,
+};
