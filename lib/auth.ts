@@ -7,6 +7,16 @@ import { authSecret, readEnv } from "./env";
 
 const env = readEnv();
 
+/** The configured origin, plus its localhost / 127.0.0.1 twin, so a local demo works under either name. */
+function localTwins(baseURL: string): string[] {
+  const url = new URL(baseURL);
+  const twin = new URL(baseURL);
+  if (url.hostname === "localhost") twin.hostname = "127.0.0.1";
+  else if (url.hostname === "127.0.0.1") twin.hostname = "localhost";
+  else return [url.origin];
+  return [url.origin, twin.origin];
+}
+
 /** Shortest password Knotwork accepts; the sign-up form and invitation form share it. */
 export const MIN_PASSWORD_LENGTH = 8;
 export const MAX_PASSWORD_LENGTH = 128;
@@ -21,6 +31,7 @@ export const auth = betterAuth({
   database: drizzleAdapter(db, { provider: "sqlite", schema }),
   secret: authSecret(env),
   baseURL: env.BETTER_AUTH_URL,
+  trustedOrigins: localTwins(env.BETTER_AUTH_URL),
   telemetry: { enabled: false },
   emailAndPassword: {
     enabled: true,

@@ -35,7 +35,8 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
 /** The auth secret: the configured one, or the labelled dev-only fallback outside production. */
 export function authSecret(env: Env = readEnv()): string {
   if (env.BETTER_AUTH_SECRET) return env.BETTER_AUTH_SECRET;
-  if (env.NODE_ENV === "production" && process.env.KNOTWORK_ALLOW_DEV_SECRET !== "1") {
+  const building = process.env.NEXT_PHASE === "phase-production-build";
+  if (env.NODE_ENV === "production" && !building) {
     throw new Error("BETTER_AUTH_SECRET must be set (32+ characters) in production.");
   }
   return DEV_ONLY_AUTH_SECRET;

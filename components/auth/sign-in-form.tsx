@@ -22,7 +22,9 @@ export function SignInForm() {
       setMessage(
         error.status === 429
           ? "Too many attempts. Please wait a minute and try again."
-          : "That e-mail and password do not match an account.",
+          : error.status === 401
+            ? "That e-mail and password do not match an account."
+            : "Signing in did not work just now. Please try again.",
       );
       return;
     }

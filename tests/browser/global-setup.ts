@@ -1,0 +1,44 @@
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import type { TestProject } from "vitest/node";
+import { buildIsStale, freePort, repoRoot, run, startNext, waitForHealth } from "./server";
+
+declare module "vitest" {
+  export interface ProvidedContext {
+    baseURL: string;
+  }
+}
+
+/**
+ * Builds once when needed, then serves the production build on a free loopback port with a fresh
+ * temp database (migrated and seeded with the demo studio).
+ */
+export default async function setup(project: TestProject) {
+  const base: NodeJS.ProcessEnv = { ...process.env, NEXT_TELEMETRY_DISABLED: "1" };
+  if (buildIsStale()) run(path.join(repoRoot, "node_modules/.bin/next"), ["build"], base);
+
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "knotwork-browser-"));
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  const env: NodeJS.ProcessEnv = {
+    ...base,
+    NODE_ENV: "production",
+    DATABASE_URL: `file:${path.join(dir, "browser.db")}`,
+    BETTER_AUTH_SECRET: "browser-test-secret-only-for-this-run-0123456789",
+    BETTER_AUTH_URL: url,
+    // Serves the development score lab (app/lab) that the score-component browser test drives.
+    KNOTWORK_LAB: "1",
+  };
+  run(path.join(repoRoot, "node_modules/.bin/tsx"), ["db/seed.ts"], env);
+  const child = startNext(port, env);
+  await waitForHealth(url, child);
+  project.provide("baseURL", url);
+
+  return async () => {
+    child.kill("SIGTERM");
+    await new Promise((r) => setTimeout(r, 300));
+    if (child.exitCode === null) child.kill("SIGKILL");
+    fs.rmSync(dir, { recursive: true, force: true });
+  };
+}
