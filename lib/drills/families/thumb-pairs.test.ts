@@ -1,0 +1,67 @@
+import fc from "fast-check";
+import { Note, Scale } from "tonal";
+import { describe, expect, test } from "vitest";
+import { makeContext } from "../build";
+import { keyScaleName, pitchName } from "../spell";
+import { makePassage } from "../test-passages";
+import type { Drill } from "../types";
+import { barProblems } from "./shared-2-layout";
+import { generateThumbPairs, pairFingers, thumbPairsOptions } from "./thumb-pairs";
+
+const ctx = makeContext();
+const notes = (d: Drill) => d.score.events.filter((e) => e.pitch);
+const names = (d: Drill) => notes(d).map((e) => pitchName(e.pitch!));
+const fingers = (d: Drill) => notes(d).map((e) => e.fingering?.[0]?.finger);
+
+describe("thumb-pairs", () => {
+  // Right hand around middle C, C major: the scale C4…C5 (tonal Scale.get("C major")).
+  const p = makePassage({ right: "E4/4 G4/4 C5/4 G4/4" });
+
+  test("thumb and 3: C major up and down, fingers 1 3 1 3 …, eighth notes", () => {
+    const d = generateThumbPairs(p, thumbPairsOptions.parse({ fingers: [3], fiveFinger: false }), ctx).drills[0];
+    expect(names(d)).toEqual(["C4", "D4", "E4", "F4", "G4", "A4", "B4", "C5", "B4", "A4", "G4", "F4", "E4", "D4", "C4"]);
+    expect(fingers(d)).toEqual([1, 3, 1, 3, 1, 3, 1, 3, 1, 3, 1, 3, 1, 3, 1]);
+    expect(notes(d).every((e) => e.duration.equals(0.5))).toBe(true);
+    expect(barProblems(d.score)).toEqual([]);
+  });
+
+  test("left hand starts on the other finger (little-finger side low)", () => {
+    expect(pairFingers(4, 2, "left")).toEqual([2, 1, 2, 1]);
+  });
+
+  test("five-finger sideways and thumb takeover", () => {
+    const r = generateThumbPairs(p, thumbPairsOptions.parse({ fingers: [2], positions: 2 }), ctx);
+    const side = r.drills.find((d) => d.variant === "five-finger-sideways")!;
+    expect(names(side)).toEqual([
+      "C4", "D4", "E4", "F4", "G4", "F4", "E4", "D4",
+      "D4", "E4", "F4", "G4", "A4", "G4", "F4", "E4",
+      "C4", "D4", "E4", "F4", "G4", "F4", "E4", "D4", "C4",
+    ]);
+    expect(fingers(side).slice(0, 8)).toEqual([1, 2, 3, 4, 5, 4, 3, 2]);
+    const take = r.drills.find((d) => d.variant === "thumb-takes-3")!;
+    expect(names(take)).toEqual(["C4", "D4", "E4", "E4", "F4", "G4", "G4", "A4", "B4", "B4", "C5"]);
+    expect(fingers(take)).toEqual([1, 2, 3, 1, 2, 3, 1, 2, 3, 1, 2]);
+  });
+
+  test("property: scales equal tonal's Scale.get(...).notes; thumb pairs only ever use {1, k}; bars exact", () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: -7, max: 7 }), fc.constantFrom("major", "minor"), fc.constantFrom(2, 3, 4),
+        fc.integer({ min: 1, max: 2 }), fc.constantFrom("right", "left"), fc.integer({ min: 36, max: 84 }),
+        (fifths, mode, k, octaves, hand, midi) => {
+          const key = { fifths, mode };
+          const pass = makePassage({ [hand]: `${Note.fromMidiSharps(midi)}/4`, key });
+          const o = thumbPairsOptions.parse({ fingers: [k], octaves, fiveFinger: false });
+          const d = generateThumbPairs(pass, o, ctx).drills[0];
+          const expected = Scale.get(keyScaleName(key)).notes;
+          const pcs = notes(d).map((e) => Note.pitchClass(pitchName(e.pitch!)));
+          for (let i = 0; i < 7 * octaves; i++) expect(pcs[i]).toBe(expected[i % 7]);
+          expect(new Set(fingers(d))).toEqual(new Set([1, k]));
+          expect(barProblems(d.score)).toEqual([]);
+          for (const e of notes(d)) expect(e.pitch!.midi >= 21 && e.pitch!.midi <= 108).toBe(true);
+        },
+      ),
+      { numRuns: 80 },
+    );
+  });
+});
