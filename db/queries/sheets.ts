@@ -1,7 +1,7 @@
-import { count, desc, eq } from "drizzle-orm";
+import { asc, count, desc, eq } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
-import { sheet, sheetDrill } from "../schema";
+import { sheet, sheetDrill, type SheetDrillMeta } from "../schema";
 
 /** The studio's drill sheets with how many drills each holds. */
 export async function listSheets(database: Db, studioId: string) {
@@ -12,4 +12,70 @@ export async function listSheets(database: Db, studioId: string) {
     .where(inStudio(sheet, studioId))
     .groupBy(sheet.id)
     .orderBy(desc(sheet.createdAt));
+}
+
+export interface NewSheetDrill {
+  family: string;
+  variant: string;
+  title: string;
+  teacherNote: string;
+  studentNote: string;
+  musicxml: string;
+  meta: SheetDrillMeta;
+}
+
+export interface NewSheet {
+  studioId: string;
+  createdBy: string;
+  passageId: string | null;
+  title: string;
+  notes?: string | null;
+  drills: readonly NewSheetDrill[];
+}
+
+/**
+ * Stores a sheet and all its drills in one transaction, positions 0…n-1 in the given order: either
+ * everything is written or nothing is. Returns the new sheet's id.
+ */
+export async function saveSheet(database: Db, input: NewSheet): Promise<string> {
+  return database.transaction(async (tx) => {
+    const id = crypto.randomUUID();
+    await tx.insert(sheet).values({
+      id,
+      studioId: input.studioId,
+      passageId: input.passageId,
+      title: input.title,
+      notes: input.notes ?? null,
+      createdBy: input.createdBy,
+    });
+    for (const [position, d] of input.drills.entries()) {
+      await tx.insert(sheetDrill).values({ sheetId: id, position, ...d });
+    }
+    return id;
+  });
+}
+
+/** A sheet of the studio with its drills in order, or null (unknown id or another studio). */
+export async function getSheet(database: Db, studioId: string, sheetId: string) {
+  const [row] = await database.select().from(sheet).where(inStudio(sheet, studioId, eq(sheet.id, sheetId))).limit(1);
+  if (!row) return null;
+  const drills = await database.select().from(sheetDrill).where(eq(sheetDrill.sheetId, row.id)).orderBy(asc(sheetDrill.position));
+  return { ...row, drills };
+}
+
+/** The studio a sheet belongs to (for access checks), or null. */
+export async function sheetStudio(database: Db, sheetId: string): Promise<string | null> {
+  const [row] = await database.select({ studioId: sheet.studioId }).from(sheet).where(eq(sheet.id, sheetId)).limit(1);
+  return row?.studioId ?? null;
+}
+
+/** One saved drill with its sheet's id and studio, or null. */
+export async function getSheetDrill(database: Db, drillId: string) {
+  const [row] = await database
+    .select({ drill: sheetDrill, studioId: sheet.studioId })
+    .from(sheetDrill)
+    .innerJoin(sheet, eq(sheet.id, sheetDrill.sheetId))
+    .where(eq(sheetDrill.id, drillId))
+    .limit(1);
+  return row ? { ...row.drill, studioId: row.studioId } : null;
 }

@@ -1,0 +1,30 @@
+import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
+import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/drill-files";
+import { GenerateRequest, requestProblems } from "@/lib/generate-request";
+import { drillsForStudioKnot } from "@/lib/knot-request";
+import { writeMusicXML } from "@/lib/score";
+
+export const dynamic = "force-dynamic";
+
+/** GET ?knot=…&request=<json>&key=…&format=… → a generated (not yet saved) drill as a file. */
+export async function GET(request: Request) {
+  const ctx = await apiTeacher();
+  if (ctx instanceof Response) return ctx;
+  const url = new URL(request.url);
+  const knotId = url.searchParams.get("knot") ?? "";
+  const key = url.searchParams.get("key") ?? "";
+  const format = url.searchParams.get("format") as DrillFormat;
+  if (!DRILL_FORMATS.includes(format)) return notFoundResponse();
+  let raw: unknown;
+  try {
+    raw = JSON.parse(url.searchParams.get("request") ?? "");
+  } catch {
+    return jsonError(400, "The drill request is not valid JSON.");
+  }
+  const parsed = GenerateRequest.safeParse(raw);
+  if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
+  const out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
+  const found = out?.drills.find((d) => d.key === key);
+  if (!found) return notFoundResponse();
+  return downloadResponse(drillFile(writeMusicXML(found.drill.score), found.drill.title, format));
+}

@@ -1,0 +1,19 @@
+import { db } from "@/db";
+import { getSheet, sheetStudio } from "@/db/queries/sheets";
+import { apiMember, notFoundResponse } from "@/lib/api-session";
+import { downloadResponse, sheetZip } from "@/lib/drill-files";
+import { canReadSheet } from "@/lib/sheet-access";
+
+export const dynamic = "force-dynamic";
+
+/** GET → a zip of the sheet's drills as MusicXML, .mxl and MIDI. */
+export async function GET(_request: Request, { params }: { params: Promise<{ sheetId: string }> }) {
+  const ctx = await apiMember();
+  if (ctx instanceof Response) return ctx;
+  const { sheetId } = await params;
+  if (!(await canReadSheet(ctx, sheetId))) return notFoundResponse();
+  const studioId = await sheetStudio(db, sheetId);
+  const sheet = studioId ? await getSheet(db, studioId, sheetId) : null;
+  if (!sheet) return notFoundResponse();
+  return downloadResponse(sheetZip(sheet.title, sheet.drills));
+}

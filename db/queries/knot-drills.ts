@@ -1,0 +1,49 @@
+import { and, eq } from "drizzle-orm";
+import { inStudio } from "../../lib/studio-scope";
+import type { Db } from "../index";
+import { handProfile, membership, passage, score, user } from "../schema";
+
+/** One knot of the studio with its piece's cleaned MusicXML, or null (unknown id or another studio). */
+export async function getKnotSource(database: Db, studioId: string, knotId: string) {
+  const [row] = await database
+    .select({
+      id: passage.id,
+      scoreId: passage.scoreId,
+      scoreTitle: score.title,
+      composer: score.composer,
+      part: passage.part,
+      hand: passage.hand,
+      fromBar: passage.fromBar,
+      toBar: passage.toBar,
+      tags: passage.tags,
+      note: passage.note,
+      musicxml: score.musicxml,
+    })
+    .from(passage)
+    .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .where(inStudio(passage, studioId, eq(passage.id, knotId)))
+    .limit(1);
+  return row ?? null;
+}
+
+/** The studio's students who have a hand profile, for the "whose hand" chooser. */
+export async function listHandProfiles(database: Db, studioId: string) {
+  return database
+    .select({ membershipId: membership.id, name: user.name, spanMm: handProfile.spanMm, octaveMm: handProfile.octaveMm })
+    .from(handProfile)
+    .innerJoin(membership, eq(membership.id, handProfile.membershipId))
+    .innerJoin(user, eq(user.id, membership.userId))
+    .where(inStudio(membership, studioId, eq(membership.role, "student")))
+    .orderBy(user.name);
+}
+
+/** One student's hand profile in this studio, or null. */
+export async function getHandProfile(database: Db, studioId: string, membershipId: string) {
+  const [row] = await database
+    .select({ spanMm: handProfile.spanMm, octaveMm: handProfile.octaveMm })
+    .from(handProfile)
+    .innerJoin(membership, eq(membership.id, handProfile.membershipId))
+    .where(inStudio(membership, studioId, eq(membership.id, membershipId)))
+    .limit(1);
+  return row ?? null;
+}

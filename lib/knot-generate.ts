@@ -1,0 +1,49 @@
+/**
+ * Drills for a stored knot: cut the knot's bars out of the piece's cleaned copy, run the chosen
+ * families with the hand profile, and turn each drill into its browser JSON.
+ */
+import { generateDrills, type Drill, type HandProfile } from "./drills/index";
+import { drillKeys, toDrillDto, type DrillDto } from "./drill-dto";
+import type { GenerateRequest } from "./generate-request";
+import { barIndex, readScore, selectPassage } from "./score/index";
+import type { Passage } from "./score/types";
+
+export interface KnotSource {
+  musicxml: string;
+  part: string;
+  hand: "right" | "left" | "both";
+  /** Printed bar numbers, as the teacher marked them. */
+  fromBar: number;
+  toBar: number;
+}
+
+/** Printed bar number → measure index (falls back to counting from 1 when the number is not printed). */
+function indexOf(score: Parameters<typeof barIndex>[0], bar: number): number {
+  return barIndex(score, bar) ?? Math.max(0, Math.min(score.measures.length - 1, bar - 1));
+}
+
+/** The knot's passage from the stored cleaned copy. */
+export function knotPassage(src: KnotSource): Passage {
+  const { score } = readScore(src.musicxml);
+  const from = indexOf(score, src.fromBar);
+  const to = Math.max(from, indexOf(score, src.toBar));
+  return selectPassage(score, { part: src.part, hand: src.hand, from, to });
+}
+
+export interface KnotDrills {
+  drills: { drill: Drill; key: string }[];
+  skipped: { family: string; reason: string }[];
+}
+
+/** Run the request on the knot; the same request always gives the same drills (fixed seed). */
+export function generateForKnot(src: KnotSource, req: GenerateRequest, profile?: HandProfile): KnotDrills {
+  const passage = knotPassage(src);
+  const result = generateDrills(passage, { families: req.families, options: req.options, profile, seed: req.seed ?? 1 });
+  const keys = drillKeys(result.drills);
+  return { drills: result.drills.map((drill, i) => ({ drill, key: keys[i] })), skipped: result.skipped };
+}
+
+/** The generate handler's JSON body. */
+export function knotDrillsJson(out: KnotDrills): { drills: DrillDto[]; skipped: KnotDrills["skipped"] } {
+  return { drills: out.drills.map(({ drill, key }) => toDrillDto(drill, key)), skipped: out.skipped };
+}

@@ -1,0 +1,14 @@
+/**
+ * Who may read a drill sheet and its downloads. One function, so the student side can add
+ * "a student of the studio with this sheet assigned" in one place.
+ */
+import { db } from "../db";
+import { sheetStudio } from "../db/queries/sheets";
+import type { StudioContext } from "./session";
+
+/** True when the signed-in member may read the sheet: for now, a teacher of the sheet's studio. */
+export async function canReadSheet(session: Pick<StudioContext, "role" | "studioId" | "membershipId">, sheetId: string): Promise<boolean> {
+  const studioId = await sheetStudio(db, sheetId);
+  if (!studioId || studioId !== session.studioId) return false;
+  return session.role === "teacher";
+}
