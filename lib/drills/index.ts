@@ -6,6 +6,19 @@ import type { Passage } from "../score/types";
 import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
 import { blocking } from "./families/blocking";
+import { doubles } from "./families/doubles";
+import { heldTone } from "./families/held-tone";
+import { liftRests } from "./families/lift-rests";
+import { notePairs } from "./families/note-pairs";
+import { octaveShift } from "./families/octave-shift";
+import { pivotWalk } from "./families/pivot-walk";
+import { rhythmVariants } from "./families/rhythm-variants";
+import { scaleRhythm } from "./families/scale-rhythm";
+import { sequence } from "./families/sequence";
+import { stops } from "./families/stops";
+import { tempoLadder } from "./families/tempo-ladder";
+import { thumbPairs } from "./families/thumb-pairs";
+import { voiceIsolation } from "./families/voice-isolation";
 
 export type { Drill, DrillContext, DrillFamily, DrillWarning, FamilyResult, HandProfile, ProblemTag, SpanReport } from "./types";
 export { PROBLEM_TAGS } from "./types";
@@ -23,7 +36,12 @@ export { difficultyMap, hardestBars } from "./difficulty";
  * families["blocking"].options.parse({}); // the default options
  */
 export const families: Readonly<Record<string, DrillFamily>> = Object.fromEntries(
-  ([blocking] as DrillFamily[]).map((f) => [f.id, f]),
+  (
+    [
+      blocking, notePairs, rhythmVariants, stops, liftRests, scaleRhythm, pivotWalk,
+      voiceIsolation, doubles, octaveShift, heldTone, sequence, thumbPairs, tempoLadder,
+    ] as DrillFamily[]
+  ).map((f) => [f.id, f]),
 );
 
 export interface GenerateOptions {
