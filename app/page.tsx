@@ -42,7 +42,7 @@ export default async function Landing() {
 
       <main className="flex-1">
         <section className="stave-lines">
-          <div className="mx-auto max-w-6xl px-4 pt-10 pb-16 sm:px-6 sm:pt-16 sm:pb-24">
+          <div className="mx-auto max-w-6xl px-4 pt-10 pb-24 sm:px-6 sm:pt-16 sm:pb-32">
             <p className="text-sm font-bold uppercase tracking-widest text-rosin">For piano teachers and their students</p>
             <h1 className="mt-3 max-w-3xl text-4xl font-semibold sm:text-6xl">
               Untangle the bars that trip your students up.

@@ -9,10 +9,13 @@ export interface NavItem {
 
 export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
+  // The longest matching href wins, so "/my/practice" does not also light up "/my".
+  const matches = items.filter((i) => pathname === i.href || pathname.startsWith(`${i.href}/`));
+  const current = matches.sort((a, b) => b.href.length - a.href.length)[0]?.href;
   return (
-    <nav aria-label="Main" className="-mx-1 flex gap-1 overflow-x-auto pb-1 sm:pb-0">
+    <nav aria-label="Main" className="-mx-1 flex flex-wrap gap-1">
       {items.map((item) => {
-        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        const active = item.href === current;
         return (
           <Link
             key={item.href}

@@ -82,7 +82,7 @@ export default async function TeacherHome() {
           ) : (
             <ul className="divide-y divide-line">
               {sheets.slice(0, 4).map((s) => (
-                <li key={s.id} className="flex justify-between gap-3 py-2">
+                <li key={s.id} className="flex items-baseline justify-between gap-3 py-2">
                   <span className="font-bold">{s.title}</span>
                   <span className="font-mono text-xs text-muted">{s.drills} drills</span>
                 </li>
@@ -96,7 +96,7 @@ export default async function TeacherHome() {
           ) : (
             <ul className="divide-y divide-line">
               {students.slice(0, 4).map((s) => (
-                <li key={s.membershipId} className="flex justify-between gap-3 py-2">
+                <li key={s.membershipId} className="flex items-baseline justify-between gap-3 py-2">
                   <span className="font-bold">{s.name}</span>
                   <span className="font-mono text-xs text-muted">{s.spanMm ? `span ${s.spanMm} mm` : "no hand profile"}</span>
                 </li>
