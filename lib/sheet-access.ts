@@ -3,12 +3,17 @@
  * "a student of the studio with this sheet assigned" in one place.
  */
 import { db } from "../db";
+import { studentHasSheet } from "../db/queries/assignments";
 import { sheetStudio } from "../db/queries/sheets";
 import type { StudioContext } from "./session";
 
-/** True when the signed-in member may read the sheet: for now, a teacher of the sheet's studio. */
+/**
+ * True when the signed-in member may read the sheet: a teacher of the sheet's studio, or a student
+ * of that studio who has the sheet assigned.
+ */
 export async function canReadSheet(session: Pick<StudioContext, "role" | "studioId" | "membershipId">, sheetId: string): Promise<boolean> {
   const studioId = await sheetStudio(db, sheetId);
   if (!studioId || studioId !== session.studioId) return false;
-  return session.role === "teacher";
+  if (session.role === "teacher") return true;
+  return studentHasSheet(db, studioId, session.membershipId, sheetId);
 }

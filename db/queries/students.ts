@@ -19,3 +19,21 @@ export async function listStudents(database: Db, studioId: string) {
     .where(inStudio(membership, studioId, eq(membership.role, "student")))
     .orderBy(asc(user.name));
 }
+
+/** True when the membership is a student of this studio. */
+export async function isStudentOf(database: Db, studioId: string, membershipId: string): Promise<boolean> {
+  const [row] = await database
+    .select({ id: membership.id })
+    .from(membership)
+    .where(inStudio(membership, studioId, eq(membership.id, membershipId), eq(membership.role, "student")))
+    .limit(1);
+  return Boolean(row);
+}
+
+/** Creates or replaces a student's hand profile (span and octave width in mm). */
+export async function saveHandProfile(database: Db, membershipId: string, values: { spanMm: number; octaveMm: number }) {
+  await database
+    .insert(handProfile)
+    .values({ membershipId, ...values })
+    .onConflictDoUpdate({ target: handProfile.membershipId, set: { ...values, updatedAt: new Date() } });
+}
