@@ -46,6 +46,12 @@ describe("pivot-walk", () => {
     expect(free.warnings.some((w) => w.code === "span")).toBe(true);
   });
 
+  test("a figure split into beats is found over the bar: the pivot C4 of a left-hand accompaniment", () => {
+    const p = makePassage({ left: "F3/8 C4/8 A3/8 C4/8 A3/8 C4/8", time: { beats: 3, beatType: 4 } });
+    const [d] = pivotWalk.generate(p, pivotWalkOptions.parse({}), makeContext()).drills;
+    expect(heads(drillText(d.score.events)).slice(6, 12)).toEqual(["F3", "C#4", "A3", "C#4", "A3", "C#4"]);
+  });
+
   test("no recurring note: skipped with a reason", () => {
     const r = pivotWalk.generate(makePassage({ right: "C4/8 D4/8 E4/8 F4/8" }), pivotWalkOptions.parse({}), makeContext());
     expect(r.drills).toHaveLength(0);

@@ -114,7 +114,10 @@ function walkDrill(passage: Passage, hand: Hand, figure: Sonority[], note: Pitch
 export function generatePivotWalk(passage: Passage, options: PivotWalkOptions, ctx: DrillContext): FamilyResult {
   const drills: Drill[] = [];
   for (const hand of passageHands(passage)) {
-    const found = findPivot(groupSonorities(passage, hand, options.groupBy, ctx.profile));
+    // A figure split by beats may hide its turn; fall back to whole bars, then half bars.
+    const found = [options.groupBy, "bar", "half-bar"]
+      .map((by) => findPivot(groupSonorities(passage, hand, by as PivotWalkOptions["groupBy"], ctx.profile)))
+      .find((f) => f !== null);
     if (!found) continue;
     const pivot = walkDrill(passage, hand, found.figure, found.pivot, [1, -1], options, ctx, false);
     if (pivot) drills.push(pivot);
