@@ -7,6 +7,7 @@ import { drillKeys, toDrillDto, type DrillDto } from "./drill-dto";
 import type { GenerateRequest } from "./generate-request";
 import { barIndex, readScore, selectPassage } from "./score/index";
 import type { Passage } from "./score/types";
+import { writeMusicXML } from "./score/write";
 
 export interface KnotSource {
   musicxml: string;
@@ -46,4 +47,18 @@ export function generateForKnot(src: KnotSource, req: GenerateRequest, profile?:
 /** The generate handler's JSON body. */
 export function knotDrillsJson(out: KnotDrills): { drills: DrillDto[]; skipped: KnotDrills["skipped"] } {
   return { drills: out.drills.map(({ drill, key }) => toDrillDto(drill, key)), skipped: out.skipped };
+}
+
+/** The knot's bars (all staves of its part) as a small MusicXML score for engraving. */
+export function knotExcerpt(src: KnotSource): string {
+  const { score } = readScore(src.musicxml);
+  const from = indexOf(score, src.fromBar);
+  const to = Math.max(from, indexOf(score, src.toBar));
+  const part = score.parts.find((p) => p.id === src.part) ?? score.parts[0];
+  const offset = score.measures[from].start;
+  const measures = score.measures.slice(from, to + 1).map((m, i) => ({ ...m, index: i, start: m.start.sub(offset) }));
+  const events = score.events
+    .filter((e) => e.part === part.id && e.measure >= from && e.measure <= to)
+    .map((e) => ({ ...e, measure: e.measure - from, onset: e.onset.sub(offset) }));
+  return writeMusicXML({ ...score, parts: [part], measures, events });
 }

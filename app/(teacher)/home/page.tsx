@@ -83,7 +83,7 @@ export default async function TeacherHome() {
             <ul className="divide-y divide-line">
               {sheets.slice(0, 4).map((s) => (
                 <li key={s.id} className="flex items-baseline justify-between gap-3 py-2">
-                  <span className="font-bold">{s.title}</span>
+                  <Link href={`/sheets/${s.id}`} className="font-bold hover:underline">{s.title}</Link>
                   <span className="font-mono text-xs text-muted">{s.drills} drills</span>
                 </li>
               ))}

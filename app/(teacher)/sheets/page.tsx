@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
@@ -20,7 +21,9 @@ export default async function SheetsPage() {
           {sheets.map((s) => (
             <li key={s.id}>
               <Card>
-                <h2 className="text-lg font-semibold">{s.title}</h2>
+                <h2 className="text-lg font-semibold">
+                  <Link href={`/sheets/${s.id}`} className="hover:underline">{s.title}</Link>
+                </h2>
                 <p className="font-mono text-xs text-muted">{s.drills} drills</p>
               </Card>
             </li>

@@ -1,0 +1,83 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Caution } from "@/components/drills/caution";
+import { DownloadLinks } from "@/components/drills/download-links";
+import { DrillEngraving } from "@/components/drills/drill-engraving";
+import { DrillFacts } from "@/components/drills/drill-facts";
+import { DrillPlayer } from "@/components/drills/drill-player";
+import { db } from "@/db";
+import { getSheet } from "@/db/queries/sheets";
+import { playbackOf } from "@/lib/drill-dto";
+import { readScore } from "@/lib/score";
+import { requireTeacher } from "@/lib/session";
+
+export const dynamic = "force-dynamic";
+export const metadata: Metadata = { title: "Drill sheet" };
+
+export default async function SheetPage({ params }: { params: Promise<{ sheetId: string }> }) {
+  const ctx = await requireTeacher();
+  const { sheetId } = await params;
+  const sheet = await getSheet(db, ctx.studioId, sheetId);
+  if (!sheet) notFound();
+  return (
+    <div className="flex flex-col gap-6">
+      <header className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
+        <div>
+          <p className="text-sm font-bold uppercase tracking-widest text-rosin">Drill sheet</p>
+          <h1 className="text-3xl font-semibold sm:text-4xl">{sheet.title}</h1>
+          <p className="font-mono text-sm text-muted">
+            {sheet.drills.length} drills
+            {sheet.passageId && <> · <Link href={`/knots/${sheet.passageId}`} className="underline">back to the knot</Link></>}
+          </p>
+        </div>
+        <a href={`/api/sheets/${sheet.id}/zip`} download className="inline-flex items-center justify-center rounded-full bg-walnut px-5 py-2.5 text-sm font-bold text-paper hover:bg-walnut-soft">
+          Download all (zip: MusicXML, .mxl, MIDI)
+        </a>
+      </header>
+      <Caution />
+      <ol className="flex flex-col gap-5" aria-label="Drills in order">
+        {sheet.drills.map((d, i) => {
+          const playback = playbackOf(readScore(d.musicxml).score);
+          const tempo = d.meta.tempo ?? { start: 60, target: 80 };
+          return (
+            <li key={d.id} data-testid="sheet-drill" className="grid gap-4 rounded-[var(--radius-card)] border border-line bg-card p-4 lg:grid-cols-[minmax(0,1.6fr)_minmax(0,1fr)]">
+              <div className="flex flex-col gap-3">
+                <h2 className="text-xl font-semibold">
+                  <span className="font-mono text-base text-muted">{i + 1}. </span>
+                  <span data-testid="sheet-drill-title">{d.title}</span>
+                </h2>
+                <DrillEngraving musicxml={d.musicxml} label={`${d.title}: engraved drill`} />
+                <DrillPlayer playback={playback} bpm={tempo.start} title={d.title} />
+              </div>
+              <div className="flex flex-col gap-3">
+                <p className="rounded-xl bg-sage-soft px-3 py-2 font-mono text-sm text-sage" data-testid="tempo-goal">
+                  Tempo: start ♩ = {tempo.start}, goal ♩ = {tempo.target}
+                </p>
+                {d.studentNote && (
+                  <div>
+                    <h3 className="text-xs font-bold uppercase tracking-wider text-muted">For the student</h3>
+                    <p>{d.studentNote}</p>
+                  </div>
+                )}
+                {d.teacherNote && (
+                  <div>
+                    <h3 className="text-xs font-bold uppercase tracking-wider text-muted">Why</h3>
+                    <p className="text-sm">{d.teacherNote}</p>
+                  </div>
+                )}
+                <DrillFacts
+                  maxSpan={d.meta.maxSpan}
+                  overSpan={(d.meta.warnings ?? []).some((w) => /comfortable span/.test(w))}
+                  estimatedFingering={(d.meta.fingeringSource?.estimated ?? 0) > 0}
+                  warnings={d.meta.warnings ?? []}
+                />
+                <DownloadLinks href={(format) => `/api/drills/${d.id}/${format}`} title={d.title} />
+              </div>
+            </li>
+          );
+        })}
+      </ol>
+    </div>
+  );
+}
