@@ -1,0 +1,161 @@
+// Property tests over random passages (fast-check): the rules every drill must keep.
+import fc from "fast-check";
+import { Note, Scale } from "tonal";
+import { describe, expect, test } from "vitest";
+import { generateDrills } from "../../lib/drills";
+import { barLength } from "../../lib/drills/build";
+import { pitchSpan } from "../../lib/drills/span";
+import { keyTonic, pitchFromName, pitchName, spellMidi } from "../../lib/drills/spell";
+import { makePassage } from "../../lib/drills/test-passages";
+import { walkSteps } from "../../lib/drills/families/pivot-walk";
+import type { Drill } from "../../lib/drills/types";
+
+const TIMES = [
+  { beats: 4, beatType: 4 },
+  { beats: 3, beatType: 4 },
+  { beats: 2, beatType: 4 },
+  { beats: 6, beatType: 8 },
+];
+const VALUES = ["16", "8", "8", "4", "4", "8.", "2"];
+
+/** One hand's text: notes or small chords around a centre, spelled in the key, with some fingering. */
+const handText = (low: number, high: number, fifths: number) =>
+  fc
+    .array(
+      fc.record({
+        root: fc.integer({ min: low, max: high }),
+        extra: fc.uniqueArray(fc.integer({ min: 1, max: 9 }), { maxLength: 2 }),
+        value: fc.constantFrom(...VALUES),
+        kind: fc.constantFrom("note", "note", "note", "chord", "rest"),
+        finger: fc.option(fc.integer({ min: 1, max: 5 }), { nil: undefined }),
+      }),
+      { minLength: 3, maxLength: 14 },
+    )
+    .map((items) =>
+      items
+        .map(({ root, extra, value, kind, finger }) => {
+          const key = { fifths, mode: "major" };
+          if (kind === "rest") return `r/${value}`;
+          const midis = kind === "chord" ? [root, ...extra.map((e) => Math.min(108, root + e))] : [root];
+          const names = [...new Set(midis)].map((m) => pitchName(spellMidi(m, key)));
+          const head = names.length > 1 ? `[${names.join(",")}]` : names[0];
+          return `${head}/${value}${finger && names.length === 1 ? `@${finger}` : ""}`;
+        })
+        .join(" "),
+    );
+
+const passages = fc
+  .record({ time: fc.constantFrom(...TIMES), fifths: fc.integer({ min: -6, max: 6 }), hands: fc.constantFrom("right", "left", "both") })
+  .chain(({ time, fifths, hands }) =>
+    fc.record({
+      time: fc.constant(time),
+      fifths: fc.constant(fifths),
+      right: hands === "left" ? fc.constant(undefined) : handText(21, 108, fifths),
+      left: hands === "right" ? fc.constant(undefined) : handText(21, 72, fifths),
+    }),
+  )
+  .map(({ time, fifths, right, left }) => makePassage({ time, key: { fifths, mode: "major" }, right, left }));
+
+function checkBars(d: Drill) {
+  for (const m of d.score.measures) {
+    for (let staff = 1; staff <= d.score.parts[0].staves; staff++) {
+      for (const voice of new Set(d.score.events.filter((e) => e.staff === staff).map((e) => e.voice))) {
+        const sum = d.score.events
+          .filter((e) => e.measure === m.index && e.staff === staff && e.voice === voice && !e.chord && !e.grace)
+          .reduce((s, e) => s.add(e.duration), barLength(m.time).sub(barLength(m.time)));
+        expect(sum.equals(barLength(m.time)), `${d.family}/${d.variant} bar ${m.number}`).toBe(true);
+      }
+    }
+  }
+}
+
+/** The families this file checks as a group (the other families carry their own property tests). */
+const CHECKED = ["blocking", "note-pairs", "rhythm-variants", "stops", "lift-rests", "scale-rhythm", "pivot-walk", "tempo-ladder"];
+
+describe("drill properties over random passages", () => {
+  test("every drill: exact bars and pitches within A0 = 21 … C8 = 108 (FACTS.md §1)", () => {
+    fc.assert(
+      fc.property(passages, fc.integer({ min: 1, max: 1000 }), (passage, seed) => {
+        const { drills } = generateDrills(passage, { seed, families: CHECKED });
+        for (const d of drills) {
+          checkBars(d);
+          for (const e of d.score.events) if (e.pitch) expect(e.pitch.midi).toBeGreaterThanOrEqual(21);
+          for (const e of d.score.events) if (e.pitch) expect(e.pitch.midi).toBeLessThanOrEqual(108);
+        }
+      }),
+      { numRuns: 40 },
+    );
+  });
+
+  test("scale-rhythm plays tonal's Scale.get(...).notes of the key (reference: tonal)", () => {
+    fc.assert(
+      fc.property(passages, (passage) => {
+        const { drills } = generateDrills(passage, { families: ["scale-rhythm"] });
+        const tonic = keyTonic(passage.key);
+        const pcs = Scale.get(`${tonic} major`).notes;
+        for (const d of drills) {
+          const staff1 = d.score.events.filter((e) => e.pitch && e.staff === 1 && e.tie !== "stop" && e.tie !== "continue");
+          const names = staff1.map((e) => Note.pitchClass(pitchName(e.pitch!)));
+          expect(names.slice(0, 7)).toEqual(pcs);
+          expect(names.slice(7, 14)).toEqual(pcs);
+        }
+      }),
+      { numRuns: 25 },
+    );
+  });
+
+  test("note-pairs: each drill shows n of N with N = (2^a − 1)(2^b − 1) (combinatorics)", () => {
+    fc.assert(
+      fc.property(passages, (passage) => {
+        const { drills } = generateDrills(passage, { families: ["note-pairs"], options: { "note-pairs": { maxCells: 200 } } });
+        for (const d of drills) {
+          const m = /\((\d+) of (\d+)\)/.exec(d.title)!;
+          expect(Number(m[1])).toBe(Number(m[2]));
+          const n = Number(m[2]);
+          const ok = [1, 2, 3, 4].some((a) => [1, 2, 3, 4].some((b) => (2 ** a - 1) * (2 ** b - 1) === n));
+          expect(ok).toBe(true);
+        }
+      }),
+      { numRuns: 25 },
+    );
+  });
+
+  test("pivot-walk steps are one semitone, sharps going up and flats going down (common practice); with safety never over the profile", () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 30, max: 100 }),
+        fc.constantFrom<1 | -1>(1, -1),
+        fc.uniqueArray(fc.integer({ min: -7, max: 7 }), { maxLength: 3 }),
+        fc.integer({ min: 90, max: 230 }),
+        (start, dir, offsets, spanMm) => {
+          const profile = { spanMm, octaveMm: 165.1 };
+          const p0 = spellMidi(start, { fifths: 0, mode: "major" });
+          const others = offsets.filter((o) => o !== 0).map((o) => start + o);
+          const otherPitches = others.map((m) => pitchFromName(Note.fromMidi(m)));
+          const fits = (p: typeof p0) => !pitchSpan([...otherPitches, p], profile).overComfortable;
+          const steps = walkSteps(p0, dir, 6, others, fits);
+          let prev = p0;
+          for (const s of steps) {
+            expect(s.midi - prev.midi).toBe(dir);
+            if (dir > 0) expect(s.alter).toBeGreaterThanOrEqual(0);
+            else expect(s.alter).toBeLessThanOrEqual(0);
+            expect(fits(s)).toBe(true);
+            expect(others).not.toContain(s.midi);
+            prev = s;
+          }
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+
+  test("with safety on, pivot-walk never writes a step past the profile", () => {
+    fc.assert(
+      fc.property(passages, fc.integer({ min: 100, max: 230 }), (passage, spanMm) => {
+        const { drills } = generateDrills(passage, { families: ["pivot-walk"], profile: { spanMm, octaveMm: 165.1 } });
+        for (const d of drills) expect(d.warnings.filter((w) => w.message.startsWith("With "))).toEqual([]);
+      }),
+      { numRuns: 25 },
+    );
+  });
+});
