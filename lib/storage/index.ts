@@ -15,7 +15,7 @@ export const DEFAULT_UPLOADS_DIR = "./data/uploads";
  * UPLOADTHING_INGEST_URL and UPLOADTHING_UFS_HOST override its endpoints), else local disk
  * under UPLOADS_DIR.
  */
-export function storeFromEnv(env: NodeJS.ProcessEnv = process.env): FileStore {
+export function storeFromEnv(env: Readonly<Record<string, string | undefined>> = process.env): FileStore {
   const token = env.UPLOADTHING_TOKEN;
   if (token) {
     return uploadThingStore({
