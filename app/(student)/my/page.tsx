@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
@@ -25,7 +26,9 @@ export default async function MyDrillSheets() {
           {sheets.map((a) => (
             <li key={a.id}>
               <Card>
-                <h2 className="text-lg font-semibold">{a.title}</h2>
+                <h2 className="text-lg font-semibold">
+                  <Link href={`/my/assignments/${a.id}`} className="underline decoration-rosin">{a.title}</Link>
+                </h2>
                 <p className="font-mono text-xs text-muted">{a.dueDate ? `due ${a.dueDate}` : "no due date"}</p>
                 {a.note ? <p className="mt-2 text-sm">{a.note}</p> : null}
               </Card>

@@ -1,0 +1,49 @@
+"use client";
+import dynamic from "next/dynamic";
+import type { PlaybackEvent } from "@/components/score/playback-timeline";
+
+const DrillPreview = dynamic(() => import("@/components/score/drill-preview").then((m) => m.DrillPreview), {
+  ssr: false,
+  loading: () => <div className="h-32 animate-pulse rounded-xl bg-paper" />,
+});
+const Player = dynamic(() => import("@/components/score/player").then((m) => m.Player), { ssr: false });
+
+export interface StudentDrill {
+  id: string;
+  title: string;
+  musicxml: string;
+  studentNote: string | null;
+  goal: number | null;
+  start: number | null;
+  warnings: string[];
+  playback: { events: PlaybackEvent[]; beatsPerBar: number; beatUnitQ: number } | null;
+}
+
+/** The drills of an assigned sheet: engraving, note, tempo goal and a player for each. */
+export function SheetDrills({ drills }: { drills: StudentDrill[] }) {
+  return (
+    <ol className="flex flex-col gap-5">
+      {drills.map((d, i) => (
+        <li key={d.id} className="rounded-[var(--radius-card)] border border-line bg-card p-4" data-testid="student-drill">
+          <div className="flex flex-wrap items-baseline justify-between gap-2">
+            <h3 className="text-lg font-semibold">{i + 1}. {d.title}</h3>
+            {d.goal ? <p className="font-mono text-sm text-sage">♩ = {d.start ?? "…"} → {d.goal}</p> : null}
+          </div>
+          <DrillPreview musicxml={d.musicxml} label={d.title} className="mt-3" />
+          {d.studentNote ? <p className="mt-3 text-sm">{d.studentNote}</p> : null}
+          {d.warnings.map((w) => <p key={w} className="mt-2 text-sm text-madder">{w}</p>)}
+          {d.playback ? (
+            <Player
+              className="mt-3"
+              events={d.playback.events}
+              beatsPerBar={d.playback.beatsPerBar}
+              beatUnitQ={d.playback.beatUnitQ}
+              initialBpm={d.start ?? d.goal ?? 60}
+              label={`Play ${d.title}`}
+            />
+          ) : null}
+        </li>
+      ))}
+    </ol>
+  );
+}
