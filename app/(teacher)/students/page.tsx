@@ -2,33 +2,41 @@ import type { Metadata } from "next";
 import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
+import { listAssignmentsForStudio } from "@/db/queries/assignments";
+import { listOpenInvitations } from "@/db/queries/invitations";
 import { listStudents } from "@/db/queries/students";
 import { requireTeacher } from "@/lib/session";
+import { InviteForm } from "./invite-form";
+import { StudentsTable, type StudentRow } from "./students-table";
 
 export const metadata: Metadata = { title: "Students" };
+export const dynamic = "force-dynamic";
 
 export default async function StudentsPage() {
   const ctx = await requireTeacher();
-  const students = await listStudents(db, ctx.studioId);
+  const [students, assignments, invitations] = await Promise.all([
+    listStudents(db, ctx.studioId),
+    listAssignmentsForStudio(db, ctx.studioId),
+    listOpenInvitations(db, ctx.studioId),
+  ]);
+  const rows: StudentRow[] = students.map((s) => ({
+    ...s,
+    assignments: assignments.filter((a) => a.studentMembershipId === s.membershipId).map((a) => ({ id: a.id, sheetTitle: a.sheetTitle, dueDate: a.dueDate })),
+  }));
   return (
-    <div>
-      <PageHeader title="Students" lead="Who is in your studio, and how far each hand comfortably reaches." />
-      {students.length === 0 ? (
+    <div className="flex flex-col gap-6">
+      <PageHeader title="Students" lead="Who is in your studio, how far each hand comfortably reaches, and what each is working on." />
+      <Card>
+        <h2 className="mb-3 text-lg">Invite a student</h2>
+        <InviteForm />
+        {invitations.length > 0 ? (
+          <p className="mt-3 text-sm text-muted">Waiting for: {invitations.map((i) => i.email).join(", ")}</p>
+        ) : null}
+      </Card>
+      {rows.length === 0 ? (
         <EmptyState title="No students yet">Invite a student by e-mail. They set their own password and see only the sheets you assign to them.</EmptyState>
       ) : (
-        <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          {students.map((s) => (
-            <li key={s.membershipId}>
-              <Card>
-                <h2 className="text-lg font-semibold">{s.name}</h2>
-                <p className="text-sm text-muted">{s.email}</p>
-                <p className="mt-3 font-mono text-xs text-muted">
-                  {s.spanMm ? `1–5 span ${s.spanMm} mm · octave ${s.octaveMm} mm` : "No hand profile yet"}
-                </p>
-              </Card>
-            </li>
-          ))}
-        </ul>
+        <StudentsTable rows={rows} />
       )}
     </div>
   );
