@@ -2,7 +2,7 @@
  * `<attributes>` (divisions, key, time, staves, clefs, transposition) and `<direction>` (octave shifts,
  * dynamics, words, metronome marks) reading.
  */
-import type { Cursor } from "./read-cursor";
+import { atBarStart, position, setDivisions, type Cursor } from "./read-cursor";
 import type { RawScore, AttrState } from "./read-types";
 import { warn } from "./read-warnings";
 import { octaveShiftSemitones } from "./pitch";
@@ -94,8 +94,8 @@ export function finishAttributes(a: AttrDraft, c: Cursor, raw: RawScore): void {
   const m = c.measure;
   if (a.divisions !== undefined) {
     if (a.divisions > 0) {
-      c.divisions = a.divisions;
-      if (m && c.pos.valueOf() === 0) m.divisions = a.divisions;
+      setDivisions(c, a.divisions);
+      if (m && atBarStart(c)) m.divisions = a.divisions;
     } else warn(raw, "bad-divisions", `<divisions> ${a.divisions} is not positive and was ignored`, c.measureIndex, "divisions");
   }
   if (a.staves !== undefined && a.staves > c.part.staves) c.part.staves = a.staves;
@@ -127,7 +127,7 @@ export function finishAttributes(a: AttrDraft, c: Cursor, raw: RawScore): void {
   next.clefs.sort((x, y) => x.staff - y.staff);
   c.state = next;
   if (!m) return;
-  const offset = c.pos;
+  const offset = position(c);
   if (offset.valueOf() === 0) m.start = { ...next, clefs: [...next.clefs] };
   const entries: AttributeChange[] = [];
   const head = { ...(change.key ? { key: change.key } : {}), ...(change.time ? { time: change.time } : {}) };

@@ -48,31 +48,19 @@ export function buildScore(raw: RawScore): Score {
   }
   const events: NoteEvent[] = [];
   for (const p of parts) {
-    const perMeasure = new Map<number, number>();
-    const own: NoteEvent[] = [];
+    // Events arrive in bar order; number them within their bar, then make onsets absolute in place.
+    let bar = -1;
+    let k = 0;
     for (const e of p.events) {
-      const k = (perMeasure.get(e.measure) ?? 0) + 1;
-      perMeasure.set(e.measure, k);
-      own.push({
-        id: `${p.id}-${e.measure}-${k}`,
-        part: e.part,
-        staff: e.staff,
-        voice: e.voice,
-        measure: e.measure,
-        onset: measures[e.measure].start.add(e.offset),
-        duration: e.duration,
-        written: e.written,
-        pitch: e.pitch,
-        chord: e.chord,
-        tie: e.tie,
-        ...(e.grace ? { grace: true } : {}),
-        ...(e.fingering.length > 0 ? { fingering: e.fingering, fingeringSource: "score" as const } : {}),
-        ...(e.marks.length > 0 ? { marks: e.marks } : {}),
-        ...(e.dynamic ? { dynamic: e.dynamic } : {}),
-        ...(e.words ? { words: e.words } : {}),
-      });
+      if (e.measure !== bar) {
+        bar = e.measure;
+        k = 0;
+      }
+      k += 1;
+      e.id = `${p.id}-${bar}-${k}`;
+      e.onset = measures[bar].start.add(e.onset);
     }
-    events.push(...sortEvents(own));
+    sortEvents(p.events, events);
   }
   const partInfos: PartInfo[] = parts.map((p) => ({ id: p.id, name: raw.partNames.get(p.id) ?? "", staves: p.staves }));
   return {
@@ -83,18 +71,33 @@ export function buildScore(raw: RawScore): Score {
   };
 }
 
-/** Order one part's events by onset, then staff, then pitch (rests first); stable otherwise. */
-function sortEvents(events: NoteEvent[]): NoteEvent[] {
-  const keyed = events.map((e, i) => ({ e, i, t: e.onset.valueOf() }));
-  keyed.sort((a, b) => {
-    if (a.t !== b.t) {
-      const exact = a.e.onset.compare(b.e.onset);
+/**
+ * Append one part's events to `out` ordered by onset, then staff, then pitch (rests first); stable
+ * otherwise. Sorts an index array on precomputed keys rather than the events themselves.
+ */
+function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
+  const n = events.length;
+  const t = new Float64Array(n);
+  const staff = new Float64Array(n);
+  const midi = new Float64Array(n);
+  const order = new Array<number>(n);
+  let sorted = true;
+  for (let i = 0; i < n; i++) {
+    const e = events[i];
+    t[i] = e.onset.valueOf();
+    staff[i] = e.staff;
+    midi[i] = e.pitch?.midi ?? -1;
+    order[i] = i;
+    if (sorted && i > 0 && compare(i - 1, i) > 0) sorted = false;
+  }
+  function compare(a: number, b: number): number {
+    if (t[a] !== t[b]) {
+      const exact = events[a].onset.compare(events[b].onset);
       if (exact !== 0) return exact;
     }
-    if (a.e.staff !== b.e.staff) return a.e.staff - b.e.staff;
-    const pa = a.e.pitch?.midi ?? -1;
-    const pb = b.e.pitch?.midi ?? -1;
-    return pa !== pb ? pa - pb : a.i - b.i;
-  });
-  return keyed.map((k) => k.e);
+    if (staff[a] !== staff[b]) return staff[a] - staff[b];
+    return midi[a] !== midi[b] ? midi[a] - midi[b] : a - b;
+  }
+  if (!sorted) order.sort(compare);
+  for (let i = 0; i < n; i++) out.push(events[order[i]]);
 }

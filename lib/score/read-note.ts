@@ -3,12 +3,12 @@
  */
 import type Fraction from "fraction.js";
 import { ScoreError } from "./errors";
-import { isStep, makePitch } from "./pitch";
-import { advance, toTime, type Cursor } from "./read-cursor";
-import { newNoteDraft, type NoteDraft, type RawScore, type ReadLimits } from "./read-types";
+import { makePitch } from "./pitch";
+import { advance, lastOnset, markOnset, position, toTime, type Cursor } from "./read-cursor";
+import { newNoteDraft, type NoteDraft, type RawEvent, type RawScore, type ReadLimits } from "./read-types";
 import { warn } from "./read-warnings";
 import { ZERO } from "./time";
-import type { NoteMark, TieFlag } from "./types";
+import type { NoteMark, Pitch, TieFlag } from "./types";
 
 export type NoteState = NoteDraft;
 
@@ -21,8 +21,6 @@ export type NoteState = NoteDraft;
 export function newNoteState(): NoteState {
   return newNoteDraft();
 }
-
-const MARKS: Record<string, NoteMark> = { fermata: "fermata", accent: "accent", staccato: "staccato", tenuto: "tenuto" };
 
 /**
  * Handle an opening tag inside `<note>` (flags that are empty elements or carry attributes).
@@ -42,8 +40,9 @@ export function openNoteChild(n: NoteState, name: string, attrs: Record<string, 
       if (attrs.type === "start") n.tieStart = true;
       else if (attrs.type === "stop") n.tieStop = true;
       break;
-    default:
-      if (MARKS[name] && !n.marks.includes(MARKS[name])) n.marks.push(MARKS[name]);
+    case "fermata": case "accent": case "staccato": case "tenuto":
+      if (!n.marks.includes(name as NoteMark)) n.marks.push(name as NoteMark);
+      break;
   }
 }
 
@@ -70,11 +69,10 @@ export function closeNoteChild(
       if (parent === "technical") {
         const finger = Number(value);
         if (Number.isInteger(finger) && finger >= 1 && finger <= 5) {
-          n.fingering.push({
-            finger,
-            ...(attrs.substitution === "yes" ? { substitution: true } : {}),
-            ...(attrs.alternate === "yes" ? { alternate: true } : {}),
-          });
+          const mark: { finger: number; substitution?: boolean; alternate?: boolean } = { finger };
+          if (attrs.substitution === "yes") mark.substitution = true;
+          if (attrs.alternate === "yes") mark.alternate = true;
+          n.fingering.push(mark);
         } else warn(raw, "fingering-text", `Fingering "${value}" is not a finger 1–5 and was left out`, c.measureIndex, "fingering");
       }
       break;
@@ -93,6 +91,10 @@ function alterOf(value: string, c: Cursor, raw: RawScore): number {
   return a;
 }
 
+function isStepLetter(s: string): s is Pitch["step"] {
+  return s.length === 1 && s >= "A" && s <= "G";
+}
+
 /**
  * Place a finished note in time, move the cursor and store the event.
  *
@@ -100,18 +102,23 @@ function alterOf(value: string, c: Cursor, raw: RawScore): number {
  * finishNote(draft, cursor, raw, { notes: 0 }, DEFAULT_LIMITS);
  */
 export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { notes: number }, limits: ReadLimits): void {
-  const place = { measure: c.measureIndex, number: c.measure?.number, element: "note" };
   if (!c.measure) return;
   let duration: Fraction = ZERO;
   if (!n.grace) {
     if (n.duration === null) {
-      if (!n.chord) throw new ScoreError("missing-duration", "A note has no <duration>", place);
+      if (!n.chord) {
+        throw new ScoreError("missing-duration", "A note has no <duration>", {
+          measure: c.measureIndex, number: c.measure.number, element: "note",
+        });
+      }
       duration = c.lastDuration;
     } else duration = toTime(c, n.duration, "note");
   }
-  const onset = n.chord ? c.lastOnset : c.pos;
-  if (!n.chord) {
-    c.lastOnset = c.pos;
+  let offset: Fraction;
+  if (n.chord) offset = lastOnset(c);
+  else {
+    markOnset(c);
+    offset = position(c);
     c.lastDuration = duration;
     if (!n.grace) advance(c, duration);
   }
@@ -121,44 +128,47 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
   }
   counter.notes += 1;
   if (counter.notes > limits.maxNotes) {
-    throw new ScoreError("too-many-notes", `The file has more than ${limits.maxNotes} notes`, place);
+    throw new ScoreError("too-many-notes", `The file has more than ${limits.maxNotes} notes`, {
+      measure: c.measureIndex, number: c.measure.number, element: "note",
+    });
   }
   if (n.staff > c.part.staves) c.part.staves = n.staff;
   let pitch = null;
   if (!n.rest && !n.unpitched) {
-    if (isStep(n.step) && Number.isFinite(n.octave)) {
+    if (isStepLetter(n.step) && Number.isFinite(n.octave)) {
       // <octave-shift> lines change only the display: MusicXML's <pitch> data is already the true pitch.
       pitch = makePitch(n.step, n.alter, n.octave, c.transpose);
     } else warn(raw, "bad-pitch", `A note has no readable <pitch>; read as a rest`, c.measureIndex, "pitch");
   } else if (n.unpitched) warn(raw, "unpitched", "Unpitched notes are read as rests", c.measureIndex, "unpitched");
   let dynamic = n.dynamic;
   let words: string | undefined;
-  if (pitch && !n.grace) {
+  if (pitch && !n.grace && (c.pendingDynamic.size > 0 || c.pendingWords.size > 0)) {
     dynamic ??= c.pendingDynamic.get(n.staff);
     words = c.pendingWords.get(n.staff);
     c.pendingDynamic.delete(n.staff);
     c.pendingWords.delete(n.staff);
   }
   const tie: TieFlag = n.tieStart && n.tieStop ? "continue" : n.tieStart ? "start" : n.tieStop ? "stop" : "none";
-  c.part.events.push({
+  const event: RawEvent = {
+    id: "",
     part: c.part.id,
     staff: n.staff,
     voice: n.voice,
     measure: c.measureIndex,
-    offset: onset,
+    onset: offset,
     duration,
-    written: {
-      type: n.type,
-      dots: n.dots,
-      tuplet: n.actual > 0 && n.normal > 0 && n.actual !== n.normal ? { actual: n.actual, normal: n.normal } : null,
-    },
+    written: { type: n.type, dots: n.dots, tuplet: n.actual > 0 && n.normal > 0 && n.actual !== n.normal ? { actual: n.actual, normal: n.normal } : null },
     pitch,
     chord: n.chord,
     tie,
-    grace: n.grace,
-    fingering: n.fingering,
-    marks: n.marks,
-    ...(dynamic ? { dynamic } : {}),
-    ...(words ? { words } : {}),
-  });
+  };
+  if (n.grace) event.grace = true;
+  if (n.fingering.length > 0) {
+    event.fingering = n.fingering;
+    event.fingeringSource = "score";
+  }
+  if (n.marks.length > 0) event.marks = n.marks;
+  if (dynamic) event.dynamic = dynamic;
+  if (words) event.words = words;
+  c.part.events.push(event);
 }

@@ -6,7 +6,7 @@
 import { SaxesParser } from "saxes";
 import { ScoreError } from "./errors";
 import { ZERO } from "./time";
-import { newCursor, toTime, type Cursor } from "./read-cursor";
+import { advance, back, barSoFar, newCursor, startBar, toTime, type Cursor } from "./read-cursor";
 import { closeNoteChild, finishNote, newNoteState, openNoteChild, type NoteState } from "./read-note";
 import {
   closeAttributesChild, closeDirectionChild, finishAttributes, finishDirection, newAttrDraft,
@@ -15,13 +15,33 @@ import {
 import type { RawMeasure, RawScore, ReadLimits } from "./read-types";
 import { warn } from "./read-warnings";
 
-interface Frame {
-  readonly name: string;
-  readonly attrs: Record<string, string>;
+/** Elements that change what sounds and that this reader does not model: each gives a warning. */
+function isUnsupported(name: string): boolean {
+  switch (name) {
+    case "tremolo": case "glissando": case "slide": case "figured-bass": case "harmon-mute": case "multiple-rest":
+      return true;
+    default:
+      return false;
+  }
 }
 
-/** Elements that change what sounds and that this reader does not model: each gives a warning. */
-const UNSUPPORTED = new Set(["tremolo", "glissando", "slide", "figured-bass", "harmon-mute", "multiple-rest"]);
+/**
+ * Elements whose text the reader uses. Character data is collected only inside them: saxes then
+ * skips building the whitespace strings between the other tags.
+ */
+function carriesText(name: string): boolean {
+  switch (name) {
+    case "step": case "alter": case "octave": case "duration": case "voice": case "staff": case "type":
+    case "actual-notes": case "normal-notes": case "fingering": case "other-dynamics":
+    case "divisions": case "fifths": case "mode": case "beats": case "beat-type": case "staves": case "sign":
+    case "line": case "clef-octave-change": case "chromatic": case "octave-change":
+    case "words": case "beat-unit": case "per-minute":
+    case "work-title": case "movement-title": case "creator": case "part-name":
+      return true;
+    default:
+      return false;
+  }
+}
 
 /**
  * Read partwise MusicXML text (already checked by `assertSafeXml`) into the raw model.
@@ -33,7 +53,11 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   const raw: RawScore = {
     title: "", movementTitle: "", composer: "", partNames: new Map(), partOrder: [], parts: new Map(), warnings: [],
   };
-  const stack: Frame[] = [];
+  // The open elements: names, attributes and whether their text is collected, one slot per depth.
+  const names: string[] = [];
+  const attrStack: Record<string, string>[] = [];
+  const textStack: boolean[] = [];
+  let depth = 0;
   let chars = "";
   let cursor: Cursor | null = null;
   let note: NoteState | null = null;
@@ -44,6 +68,16 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   const counter = { notes: 0 };
 
   const parser = new SaxesParser({ position: false });
+  const onText = (t: string) => {
+    chars += t;
+  };
+  let collecting = false;
+  const collect = (on: boolean) => {
+    if (on === collecting) return;
+    collecting = on;
+    if (on) parser.on("text", onText);
+    else parser.off("text");
+  };
   parser.on("opentag", (tag) => {
     const name = tag.name;
     const attrs = tag.attributes as Record<string, string>;
@@ -56,8 +90,13 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         throw new ScoreError("not-musicxml", `The root element is <${name}>, not <score-partwise>`, { element: name });
       }
     }
-    stack.push({ name, attrs });
+    names[depth] = name;
+    attrStack[depth] = attrs;
+    const text = carriesText(name);
+    textStack[depth] = text;
+    depth += 1;
     chars = "";
+    collect(text);
     switch (name) {
       case "score-part":
         scorePartId = attrs.id ?? "";
@@ -102,39 +141,37 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         break;
       default:
         if (note) openNoteChild(note, name, attrs);
-        if (UNSUPPORTED.has(name) && cursor) {
+        if (cursor && isUnsupported(name)) {
           warn(raw, "unsupported", `<${name}> is not modelled and was left out`, cursor.measureIndex, name);
         }
     }
   });
 
-  parser.on("text", (t) => {
-    chars += t;
-  });
-  parser.on("cdata", (t) => {
-    chars += t;
-  });
+  parser.on("cdata", onText);
 
   parser.on("closetag", () => {
-    const frame = stack.pop();
-    if (!frame) return;
-    const name = frame.name;
-    const parent = stack.length > 0 ? stack[stack.length - 1].name : "";
-    const value = chars.trim();
+    if (depth === 0) return;
+    depth -= 1;
+    const name = names[depth];
+    const attrs = attrStack[depth];
+    const parent = depth > 0 ? names[depth - 1] : "";
+    const value = chars.length === 0 ? "" : chars.trim();
     chars = "";
+    // Text after a child element belongs to the parent again.
+    collect(depth > 0 && textStack[depth - 1]);
     const c = cursor as Cursor | null;
     if (note && c) {
       if (name === "note") {
         finishNote(note, c, raw, counter, limits);
         note = null;
-      } else closeNoteChild(note, name, parent, value, frame.attrs, c, raw);
+      } else closeNoteChild(note, name, parent, value, attrs, c, raw);
       return;
     }
     if (attr && c) {
       if (name === "attributes") {
         finishAttributes(attr, c, raw);
         attr = null;
-      } else closeAttributesChild(attr, name, parent, value, frame.attrs, c, raw);
+      } else closeAttributesChild(attr, name, parent, value, attrs, c, raw);
       return;
     }
     if (dir && c) {
@@ -142,7 +179,7 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         const tempo = finishDirection(dir, c);
         if (tempo !== undefined && c.measure) setTempo(c.measure, tempo, false);
         dir = null;
-      } else closeDirectionChild(dir, name, parent, value, frame.attrs);
+      } else closeDirectionChild(dir, name, parent, value, attrs);
       return;
     }
     switch (name) {
@@ -153,7 +190,7 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         raw.movementTitle = value;
         break;
       case "creator":
-        if (parent === "identification" && frame.attrs.type === "composer" && !raw.composer) raw.composer = value;
+        if (parent === "identification" && attrs.type === "composer" && !raw.composer) raw.composer = value;
         break;
       case "part-name":
         if (parent === "score-part" && scorePartId) raw.partNames.set(scorePartId, value);
@@ -165,7 +202,10 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         if (c && (parent === "backup" || parent === "forward")) moveCursor(c, parent, Number(value), raw);
         break;
       case "measure":
-        if (c) c.measure = null;
+        if (c?.measure) {
+          c.measure.length = barSoFar(c);
+          c.measure = null;
+        }
         break;
       case "part":
         cursor = null;
@@ -201,22 +241,15 @@ function openMeasure(c: Cursor, attrs: Record<string, string>, limits: ReadLimit
   };
   c.part.measures.push(m);
   c.measure = m;
-  c.pos = ZERO;
-  c.lastOnset = ZERO;
+  startBar(c);
 }
 
 function moveCursor(c: Cursor, kind: "backup" | "forward", duration: number, raw: RawScore): void {
   if (duration === 0) return;
   const by = toTime(c, duration, kind);
-  if (kind === "forward") {
-    c.pos = c.pos.add(by);
-    if (c.measure && c.pos.compare(c.measure.length) > 0) c.measure.length = c.pos;
-    return;
-  }
-  c.pos = c.pos.sub(by);
-  if (c.pos.compare(0) < 0) {
+  if (kind === "forward") advance(c, by);
+  else if (!back(c, by)) {
     warn(raw, "backup-before-bar", "A <backup> goes before the start of the bar; clamped to the bar start", c.measureIndex, "backup");
-    c.pos = ZERO;
   }
 }
 

@@ -4,8 +4,7 @@
  */
 import type Fraction from "fraction.js";
 import type {
-  AttributeChange, Clef, Fingering, KeySignature, NoteMark, RepeatMarks, ScoreWarning, TieFlag,
-  TimeSignature, Written, Pitch,
+  AttributeChange, Clef, Fingering, KeySignature, NoteEvent, NoteMark, RepeatMarks, ScoreWarning, TimeSignature,
 } from "./types";
 
 /** Limits on what one file may hold. */
@@ -24,24 +23,11 @@ export interface ReadOptions {
 
 export const DEFAULT_LIMITS: ReadLimits = { maxMeasures: 5000, maxNotes: 200_000 };
 
-/** A note as read, with its offset inside its bar; onsets become absolute once bar lengths are known. */
-export interface RawEvent {
-  readonly part: string;
-  readonly staff: number;
-  readonly voice: string;
-  readonly measure: number;
-  readonly offset: Fraction;
-  readonly duration: Fraction;
-  readonly written: Written;
-  readonly pitch: Pitch | null;
-  readonly chord: boolean;
-  readonly tie: TieFlag;
-  readonly grace: boolean;
-  readonly fingering: readonly Fingering[];
-  readonly marks: readonly NoteMark[];
-  readonly dynamic?: string;
-  readonly words?: string;
-}
+/**
+ * A note as read, already in the shape of the public `NoteEvent`: while reading, `onset` holds the
+ * offset inside its bar and `id` is empty; `buildScore` fills both in place once bar lengths are known.
+ */
+export type RawEvent = { -readonly [K in keyof NoteEvent]: NoteEvent[K] };
 
 /** Key, time and clefs in force. */
 export interface AttrState {
