@@ -51,7 +51,7 @@ export default async function TeacherHome() {
             <ul className="divide-y divide-line">
               {pieces.slice(0, 4).map((p) => (
                 <li key={p.id} className="flex items-baseline justify-between gap-3 py-2">
-                  <span className="font-bold">{p.title}</span>
+                  <Link href={`/pieces/${p.id}`} className="font-bold hover:underline">{p.title}</Link>
                   <span className="shrink-0 font-mono text-xs text-muted">{p.bars} bars</span>
                 </li>
               ))}
@@ -69,8 +69,11 @@ export default async function TeacherHome() {
             <ul className="divide-y divide-line">
               {knots.slice(0, 4).map((k) => (
                 <li key={k.id} className="py-2">
-                  <span className="font-bold">{k.scoreTitle}</span>{" "}
-                  <span className="font-mono text-xs text-muted">bars {k.fromBar}–{k.toBar} · {k.hand}</span>
+                  <Link href={`/knots/${k.id}`} className="hover:underline">
+                    <span className="font-bold">{k.scoreTitle}</span>{" "}
+                    <span className="font-mono text-xs text-muted">bars {k.fromBar}–{k.toBar} · {k.hand}</span>
+                  </Link>
+                  {k.tags.length > 0 ? <span className="block text-xs text-muted">{k.tags.join(", ")}</span> : null}
                 </li>
               ))}
             </ul>

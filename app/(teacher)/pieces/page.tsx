@@ -1,33 +1,30 @@
 import type { Metadata } from "next";
 import { Card, PageHeader } from "@/components/ui/card";
-import { EmptyState } from "@/components/ui/empty-state";
+import { PiecesTable } from "@/components/pieces/pieces-table";
+import { UploadForm } from "@/components/pieces/upload-form";
 import { db } from "@/db";
-import { listScores } from "@/db/queries/scores";
+import { listScoresWithKnots } from "@/db/queries/scores";
 import { requireTeacher } from "@/lib/session";
 
 export const metadata: Metadata = { title: "Pieces" };
 
 export default async function PiecesPage() {
   const ctx = await requireTeacher();
-  const pieces = await listScores(db, ctx.studioId);
+  const rows = await listScoresWithKnots(db, ctx.studioId);
+  const pieces = rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
   return (
-    <div>
+    <div className="flex flex-col gap-6">
       <PageHeader title="Pieces" lead="The scores in your studio. Knotwork keeps a cleaned copy of each file you upload." />
-      {pieces.length === 0 ? (
-        <EmptyState title="No pieces yet">Upload a MusicXML file (.musicxml, .xml or .mxl) exported from your notation program.</EmptyState>
-      ) : (
-        <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-          {pieces.map((p) => (
-            <li key={p.id}>
-              <Card>
-                <h2 className="text-lg font-semibold">{p.title}</h2>
-                <p className="text-sm text-muted">{p.composer ?? "Composer not given"}</p>
-                <p className="mt-3 font-mono text-xs text-muted">{p.bars} bars</p>
-              </Card>
-            </li>
-          ))}
-        </ul>
-      )}
+      <div className="grid gap-6 lg:grid-cols-[20rem_1fr] lg:items-start">
+        <Card>
+          <h2 className="mb-3 text-lg font-semibold">Upload a piece</h2>
+          <UploadForm />
+        </Card>
+        <section aria-labelledby="pieces-list-title" className="min-w-0">
+          <h2 id="pieces-list-title" className="sr-only">Your pieces</h2>
+          <PiecesTable initial={pieces} />
+        </section>
+      </div>
     </div>
   );
 }

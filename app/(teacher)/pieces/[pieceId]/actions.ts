@@ -1,0 +1,56 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { notFound } from "next/navigation";
+import { z } from "zod";
+import { db } from "@/db";
+import { insertPassage } from "@/db/queries/passages";
+import { getScore } from "@/db/queries/scores";
+import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
+import { PROBLEM_TAGS } from "@/lib/drills";
+import { readScore } from "@/lib/score";
+import { requireTeacher } from "@/lib/session";
+import { printedBar } from "./piece-data";
+
+const KnotInput = z
+  .object({
+    scoreId: z.string().min(1),
+    from: z.number().int().min(0),
+    to: z.number().int().min(0),
+    hand: z.enum(["right", "left", "both"]),
+    tags: z.array(z.enum(PROBLEM_TAGS)).min(1, "Tick at least one problem.").max(PROBLEM_TAGS.length),
+    note: z.string().trim().max(500, "Keep the note under 500 characters.").optional(),
+  })
+  .refine((v) => v.from <= v.to, { message: "The first bar must come before the last.", path: ["to"] });
+
+export type KnotInput = Omit<z.input<typeof KnotInput>, "scoreId">;
+
+/** Marks a knot on the selected bars of a piece of the teacher's studio. */
+export async function createKnot(scoreId: string, raw: KnotInput): Promise<ActionResult<{ id: string }>> {
+  const ctx = await requireTeacher();
+  const parsed = KnotInput.safeParse({ ...raw, scoreId });
+  if (!parsed.success) return fromZodError(parsed.error, "Please check the knot.");
+  const input = parsed.data;
+  const row = await getScore(db, ctx.studioId, input.scoreId);
+  if (!row) notFound();
+  const { score } = readScore(row.musicxml);
+  const from = score.measures[input.from];
+  const to = score.measures[input.to];
+  if (!from || !to) return fail("Those bars are not in this piece.", { to: ["Select bars inside the piece."] });
+  const id = await insertPassage(db, {
+    studioId: ctx.studioId,
+    scoreId: row.id,
+    createdBy: ctx.user.id,
+    part: score.parts[0]?.id ?? "P1",
+    hand: input.hand,
+    fromBar: printedBar(from.number, from.index),
+    toBar: printedBar(to.number, to.index),
+    tags: input.tags,
+    note: input.note ? input.note : null,
+  });
+  if (!id) notFound();
+  revalidatePath(`/pieces/${row.id}`);
+  revalidatePath("/pieces");
+  revalidatePath("/knots");
+  revalidatePath("/home");
+  return ok({ id });
+}

@@ -1,0 +1,137 @@
+"use client";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from "@tanstack/react-table";
+import { DeletePieceDialog } from "./delete-piece-dialog";
+import { fetchPieces, pieceKeys, type PieceListRow } from "./piece-keys";
+
+const col = createColumnHelper<PieceListRow>();
+const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
+
+/** The studio's pieces: sortable columns, a filter box, and delete with confirmation. */
+export function PiecesTable({ initial }: { initial: PieceListRow[] }) {
+  const queryClient = useQueryClient();
+  const { data = [], isError } = useQuery({ queryKey: pieceKeys.list(), queryFn: fetchPieces, initialData: initial });
+  const [sorting, setSorting] = useState<SortingState>([{ id: "createdAt", desc: true }]);
+  const [filter, setFilter] = useState("");
+  const [toDelete, setToDelete] = useState<PieceListRow | null>(null);
+  const remove = useMutation({
+    mutationFn: async (id: string) => {
+      const res = await fetch(`/api/pieces/${id}`, { method: "DELETE" });
+      if (!res.ok) throw new Error(((await res.json().catch(() => ({}))) as { error?: string }).error ?? "The piece could not be deleted.");
+    },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: pieceKeys.all }),
+  });
+
+  const columns = useMemo(
+    () => [
+      col.accessor("title", {
+        header: "Title",
+        cell: (c) => <Link href={`/pieces/${c.row.original.id}`} className="font-bold text-walnut underline-offset-2 hover:underline">{c.getValue()}</Link>,
+      }),
+      col.accessor((r) => r.composer ?? "", { id: "composer", header: "Composer", cell: (c) => c.getValue() || <span className="text-muted">not given</span> }),
+      col.accessor("bars", { header: "Bars", cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      col.accessor("createdAt", { header: "Uploaded", cell: (c) => dateFormat.format(new Date(c.getValue())), enableGlobalFilter: false }),
+      col.accessor("knots", { header: "Knots", cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
+      col.display({
+        id: "actions",
+        header: () => <span className="sr-only">Actions</span>,
+        cell: (c) => (
+          <button type="button" onClick={() => setToDelete(c.row.original)} className="rounded-full px-3 py-1 text-sm font-bold text-madder hover:bg-madder-soft">
+            Delete<span className="sr-only"> {c.row.original.title}</span>
+          </button>
+        ),
+      }),
+    ],
+    [],
+  );
+  const table = useReactTable({
+    data,
+    columns,
+    state: { sorting, globalFilter: filter },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setFilter,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+  });
+
+  return (
+    <div className="flex flex-col gap-3">
+      <label className="flex max-w-sm flex-col gap-1 text-sm font-bold text-walnut">
+        Filter pieces
+        <input
+          type="search"
+          value={filter}
+          onChange={(e) => setFilter(e.target.value)}
+          placeholder="Title or composer"
+          className="rounded-xl border border-line bg-card px-3.5 py-2 text-base font-normal text-ink outline-none focus:border-walnut"
+        />
+      </label>
+      {isError ? <p role="alert" className="text-sm text-madder">The list could not be refreshed.</p> : null}
+      <div className="overflow-x-auto rounded-2xl border border-line bg-card">
+        <table className="w-full min-w-[36rem] text-left text-sm" aria-label="Pieces">
+          <thead className="border-b border-line bg-paper">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  return (
+                    <th key={h.id} scope="col" className="px-4 py-2.5 font-bold text-walnut" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}>
+                      {h.column.getCanSort() ? (
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 rounded hover:underline">
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden="true" className="text-xs text-muted">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody className="divide-y divide-line">
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="hover:bg-paper/60">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-4 py-2.5 align-middle">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                ))}
+              </tr>
+            ))}
+            {table.getRowModel().rows.length === 0 ? (
+              <tr>
+                <td colSpan={columns.length} className="px-4 py-6 text-center text-muted">
+                  {data.length === 0 ? "No pieces yet — upload one above." : "No piece matches the filter."}
+                </td>
+              </tr>
+            ) : null}
+          </tbody>
+        </table>
+      </div>
+      <DeletePieceDialog
+        piece={toDelete}
+        onCancel={() => setToDelete(null)}
+        onConfirm={async (p) => {
+          try {
+            await remove.mutateAsync(p.id);
+            setToDelete(null);
+            return null;
+          } catch (e) {
+            return (e as Error).message;
+          }
+        }}
+      />
+    </div>
+  );
+}
