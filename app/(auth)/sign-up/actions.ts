@@ -4,7 +4,10 @@ import { redirect } from "next/navigation";
 import { db } from "@/db";
 import { fail, type ActionResult } from "@/lib/action-result";
 import { auth } from "@/lib/auth";
+import { clientKey, createRateLimiter } from "@/lib/rate-limit";
 import { createTeacherAccount } from "@/lib/teacher-sign-up";
+
+const signUpLimiter = createRateLimiter(10, 10 * 60 * 1000);
 
 export type SignUpState = (ActionResult<null> & { values?: Record<string, string> }) | null;
 
@@ -20,12 +23,16 @@ export async function signUpTeacher(_prev: SignUpState, form: FormData): Promise
     studioName: String(form.get("studioName") ?? ""),
   };
   const values = { name: raw.name, email: raw.email, studioName: raw.studioName };
+  const requestHeaders = await headers();
+  if (!signUpLimiter.take(clientKey(requestHeaders))) {
+    return { ...fail("Too many sign-up attempts from here. Please wait a few minutes."), values };
+  }
   const created = await createTeacherAccount(db, raw);
   if (!created.ok) return { ...created, values };
   try {
     await auth.api.signInEmail({
       body: { email: created.data.email, password: raw.password },
-      headers: await headers(),
+      headers: requestHeaders,
     });
   } catch {
     return { ...fail("Your studio was created, but signing in failed. Please sign in."), values };
