@@ -4,6 +4,7 @@ import { nextCookies } from "better-auth/next-js";
 import { db } from "../db";
 import * as schema from "../db/schema";
 import { authSecret, readEnv } from "./env";
+import { resetPasswordMail, sendMail } from "./mail";
 
 const env = readEnv();
 
@@ -37,6 +38,10 @@ export const auth = betterAuth({
     enabled: true,
     minPasswordLength: MIN_PASSWORD_LENGTH,
     maxPasswordLength: MAX_PASSWORD_LENGTH,
+    resetPasswordTokenExpiresIn: 60 * 60,
+    sendResetPassword: async ({ user, url }) => {
+      await sendMail({ to: user.email, ...resetPasswordMail({ name: user.name, link: url }) });
+    },
   },
   disabledPaths: ["/sign-up/email"],
   rateLimit: {

@@ -9,6 +9,8 @@ export const NAV_BY_ROLE: Record<Role, NavItem[]> = {
     { href: "/knots", label: "Knots" },
     { href: "/sheets", label: "Drill sheets" },
     { href: "/students", label: "Students" },
+    { href: "/assignments", label: "Assignments" },
+    { href: "/progress", label: "Progress" },
   ],
   student: [
     { href: "/my", label: "My drill sheets" },

@@ -1,0 +1,26 @@
+"use client";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormMessage } from "@/components/ui/field";
+import { authClient } from "@/lib/auth-client";
+
+/** Asks better-auth for a reset link; the answer is the same whether or not the e-mail has an account. */
+export function ForgotForm() {
+  const [state, setState] = useState<"idle" | "sending" | "sent" | "error">("idle");
+  async function submit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const email = String(new FormData(e.currentTarget).get("email") ?? "").trim();
+    if (!email) return setState("error");
+    setState("sending");
+    const { error } = await authClient.requestPasswordReset({ email, redirectTo: "/reset-password" });
+    setState(error ? "error" : "sent");
+  }
+  if (state === "sent") return <p role="status" className="text-sm">If an account uses that e-mail, a reset link is on its way. It works for one hour.</p>;
+  return (
+    <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
+      <FormMessage message={state === "error" ? "Enter the e-mail you sign in with and try again." : null} />
+      <Field label="E-mail" name="email" type="email" autoComplete="email" required />
+      <Button type="submit" disabled={state === "sending"}>{state === "sending" ? "Sending…" : "Send reset link"}</Button>
+    </form>
+  );
+}

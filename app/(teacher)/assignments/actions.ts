@@ -1,0 +1,18 @@
+"use server";
+import { revalidatePath } from "next/cache";
+import { db } from "@/db";
+import type { ActionResult } from "@/lib/action-result";
+import { readEnv } from "@/lib/env";
+import { requireTeacher } from "@/lib/session";
+import { assignSheet } from "./assign-sheet";
+
+/** Assign a sheet: teacher only, the form's schema again on the server, one transaction, then mail. */
+export async function assignSheetAction(raw: unknown): Promise<ActionResult<{ ids: string[] }>> {
+  const ctx = await requireTeacher();
+  const result = await assignSheet(db, ctx, raw, readEnv().BETTER_AUTH_URL);
+  if (result.ok) {
+    revalidatePath("/assignments");
+    revalidatePath("/students");
+  }
+  return result;
+}
