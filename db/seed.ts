@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import { insertCredentialUser } from "../lib/teacher-sign-up";
 import type { Db } from "./index";
 import { loadDemoPieces } from "./demo-pieces";
+import { seedDemoSheet } from "./demo-sheet";
 import { handProfile, membership, passage, score, studio, user } from "./schema";
 
 /** Demo-only sign-ins, printed by `npm run demo`. Never use these anywhere real. */
@@ -86,6 +87,13 @@ export async function seedDemo(database: Db): Promise<{ studioId: string; pieces
         });
       }
     }
+    const [first] = await tx
+      .select({ id: membership.id })
+      .from(membership)
+      .innerJoin(user, eq(user.id, membership.userId))
+      .where(and(eq(user.email, DEMO_STUDENTS[0].email), eq(membership.studioId, studioId)))
+      .limit(1);
+    await seedDemoSheet(db, { studioId, teacherId, studentMembershipId: first?.id ?? null });
     return { studioId, pieces: pieces.length };
   });
 }
