@@ -29,7 +29,7 @@ export function DrillCard({
     >
       <header className="flex items-start justify-between gap-3">
         <div>
-          <p className="text-xs font-bold uppercase tracking-wider text-rosin">{familyLabel}</p>
+          <p className="text-xs font-bold uppercase tracking-wider text-walnut-soft">{familyLabel}</p>
           <h3 id={`${id}-title`} className="text-lg leading-tight font-semibold">
             {drill.title}
           </h3>

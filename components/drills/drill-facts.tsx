@@ -25,7 +25,7 @@ export function DrillFacts({
           <span
             data-testid="span-badge"
             data-over={overSpan || undefined}
-            className={`rounded-full px-2.5 py-0.5 ${overSpan ? "bg-madder-soft text-madder" : "bg-sage-soft text-sage"}`}
+            className={`rounded-full px-2.5 py-0.5 ${overSpan ? "bg-madder-soft text-madder" : "bg-sage-soft text-ink"}`}
           >
             {overSpan ? "Over span: " : "Span: "}
             {spans.join(", ")}

@@ -103,10 +103,10 @@ describe("generate drills for a knot and save a drill sheet", () => {
     }
     // Keyboard drag: Space lifts the handle, ArrowUp moves, Space drops.
     await tabTo(page, `[data-testid="sheet-item"][data-key="${keys[2]}"] [data-testid="drag-handle"]`);
-    await page.keyboard.press("Space");
-    await page.keyboard.press("ArrowUp");
-    await page.keyboard.press("ArrowUp");
-    await page.keyboard.press("Space");
+    for (const key of ["Space", "ArrowUp", "ArrowUp", "Space"]) {
+      await page.keyboard.press(key);
+      await page.waitForTimeout(250);
+    }
     await page.waitForFunction((k) => document.querySelector('[data-testid="sheet-item"]')?.getAttribute("data-key") === k, keys[2]);
     // Move button with Enter: the first picked drill goes down one → keys[2], keys[1], keys[0].
     await tabTo(page, `[data-testid="sheet-item"][data-key="${keys[0]}"] button[aria-label$=" down"]`);
@@ -174,6 +174,7 @@ describe("generate drills for a knot and save a drill sheet", () => {
       expect(onGenerate, describeViolations(onGenerate)).toEqual([]);
       await page.evaluate(() => window.scrollTo(0, 0));
       await shoot(page, `generate-${width}`);
+      await page.screenshot({ path: (await shoot(page, `generate-top-${width}`)), fullPage: false });
       const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
       expect(overflow).toBeLessThanOrEqual(0);
       await page.goto(sheetPath);

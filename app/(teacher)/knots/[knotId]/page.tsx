@@ -39,7 +39,7 @@ export default async function KnotGeneratePage({ params }: { params: Promise<{ k
     <div className="flex flex-col gap-6">
       <header className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.2fr)] lg:items-start">
         <div className="flex flex-col gap-2">
-          <p className="text-sm font-bold uppercase tracking-widest text-rosin">Knot · generate drills</p>
+          <p className="text-sm font-bold uppercase tracking-widest text-walnut-soft">Knot · generate drills</p>
           <h1 className="text-3xl font-semibold">{knot.scoreTitle}</h1>
           <p className="font-mono text-sm text-muted">
             {bars} · {knot.hand === "both" ? "both hands" : `${knot.hand} hand`}

@@ -24,7 +24,7 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
         <div>
-          <p className="text-sm font-bold uppercase tracking-widest text-rosin">Drill sheet</p>
+          <p className="text-sm font-bold uppercase tracking-widest text-walnut-soft">Drill sheet</p>
           <h1 className="text-3xl font-semibold sm:text-4xl">{sheet.title}</h1>
           <p className="font-mono text-sm text-muted">
             {sheet.drills.length} drills
@@ -51,7 +51,7 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
                 <DrillPlayer playback={playback} bpm={tempo.start} title={d.title} />
               </div>
               <div className="flex flex-col gap-3">
-                <p className="rounded-xl bg-sage-soft px-3 py-2 font-mono text-sm text-sage" data-testid="tempo-goal">
+                <p className="rounded-xl bg-sage-soft px-3 py-2 font-mono text-sm text-ink" data-testid="tempo-goal">
                   Tempo: start ♩ = {tempo.start}, goal ♩ = {tempo.target}
                 </p>
                 {d.studentNote && (
