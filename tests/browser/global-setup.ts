@@ -7,6 +7,9 @@ import { buildIsStale, freePort, repoRoot, run, startNext, waitForHealth } from 
 declare module "vitest" {
   export interface ProvidedContext {
     baseURL: string;
+    /** The served app's SQLite file and uploads folder, for "nothing stored" checks. */
+    databaseFile: string;
+    uploadsDir: string;
   }
 }
 
@@ -25,15 +28,20 @@ export default async function setup(project: TestProject) {
     ...base,
     NODE_ENV: "production",
     DATABASE_URL: `file:${path.join(dir, "browser.db")}`,
+    UPLOADS_DIR: path.join(dir, "uploads"),
     BETTER_AUTH_SECRET: "browser-test-secret-only-for-this-run-0123456789",
     BETTER_AUTH_URL: url,
     // Serves the development score lab (app/lab) that the score-component browser test drives.
     KNOTWORK_LAB: "1",
+    // Serves the development outbox (app/dev/outbox), where the student browser test reads invitations.
+    KNOTWORK_DEV_OUTBOX: "1",
   };
   run(path.join(repoRoot, "node_modules/.bin/tsx"), ["db/seed.ts"], env);
   const child = startNext(port, env);
   await waitForHealth(url, child);
   project.provide("baseURL", url);
+  project.provide("databaseFile", path.join(dir, "browser.db"));
+  project.provide("uploadsDir", path.join(dir, "uploads"));
 
   return async () => {
     child.kill("SIGTERM");
