@@ -1,11 +1,44 @@
 import type { NextConfig } from "next";
 
+/**
+ * Content-Security-Policy: only this origin. Next's inline bootstrap scripts and React/OSMD inline
+ * styles need 'unsafe-inline'; OSMD's SVG and fonts may use data: URIs; tone's audio worklets and
+ * decoded samples use blob: URLs. `next dev` also needs eval for fast refresh.
+ */
+const dev = process.env.NODE_ENV !== "production";
+const contentSecurityPolicy = [
+  "default-src 'self'",
+  `script-src 'self' 'unsafe-inline' blob:${dev ? " 'unsafe-eval'" : ""}`,
+  "style-src 'self' 'unsafe-inline'",
+  "img-src 'self' data: blob:",
+  "font-src 'self' data:",
+  "connect-src 'self' blob: data:",
+  "media-src 'self' blob: data:",
+  "worker-src 'self' blob:",
+  "object-src 'none'",
+  "base-uri 'self'",
+  "form-action 'self'",
+  "frame-ancestors 'none'",
+].join("; ");
+
+const securityHeaders = [
+  { key: "Content-Security-Policy", value: contentSecurityPolicy },
+  { key: "X-Content-Type-Options", value: "nosniff" },
+  { key: "X-Frame-Options", value: "DENY" },
+  { key: "Referrer-Policy", value: "strict-origin-when-cross-origin" },
+];
+
 const nextConfig: NextConfig = {
+  // A second build folder (e.g. for the hardening suite) so two builds never overwrite each other.
+  distDir: process.env.KNOTWORK_DIST_DIR || ".next",
   serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],
   // forbidden() + app/forbidden.tsx: a student opening a teacher page gets a real 403.
   experimental: { authInterrupts: true },
   // `npm test` type-checks the whole project once with tsc; the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
+  async headers() {
+    return [{ source: "/:path*", headers: securityHeaders }];
+  },
 };
 
 export default nextConfig;

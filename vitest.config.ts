@@ -7,7 +7,7 @@ export default defineConfig({
   test: {
     pool: "forks",
     include: ["lib/**/*.test.ts", "tests/**/*.test.ts"],
-    exclude: ["tests/browser/**", "node_modules/**"],
+    exclude: ["tests/browser/**", "tests/hardening/**", "node_modules/**"],
     testTimeout: 60_000,
     hookTimeout: 120_000,
     setupFiles: ["tests/setup.ts"],

@@ -53,6 +53,13 @@ npx vitest run --config vitest.browser.config.ts --reporter=default --reporter=j
 read -r p f < <(count artifacts/vitest-browser.json)
 passed=$((passed + p)); failed=$((failed + f))
 
+echo "── Hardening (production build: hostile uploads, access control, headers, crash, load smoke, sizes)"
+rm -f artifacts/vitest-hardening.json
+npx vitest run --config vitest.hardening.config.ts --reporter=default --reporter=json \
+  --outputFile=artifacts/vitest-hardening.json || status=1
+read -r p f < <(count artifacts/vitest-hardening.json)
+passed=$((passed + p)); failed=$((failed + f))
+
 if [ "$failed" -gt 0 ]; then status=1; fi
 echo "${passed} passed, ${failed} failed"
 exit "$status"
