@@ -49,16 +49,24 @@ export function buildScore(raw: RawScore): Score {
   const events: NoteEvent[] = [];
   for (const p of parts) {
     // Events arrive in bar order; number them within their bar, then make onsets absolute in place.
+    // Notes of a bar that share an offset (chords, hands) share one onset.
     let bar = -1;
     let k = 0;
+    const onsets = new Map<Fraction, Fraction>();
     for (const e of p.events) {
       if (e.measure !== bar) {
         bar = e.measure;
         k = 0;
+        onsets.clear();
       }
       k += 1;
       e.id = `${p.id}-${bar}-${k}`;
-      e.onset = measures[bar].start.add(e.onset);
+      let onset = onsets.get(e.onset);
+      if (onset === undefined) {
+        onset = measures[bar].start.add(e.onset);
+        onsets.set(e.onset, onset);
+      }
+      e.onset = onset;
     }
     sortEvents(p.events, events);
   }
@@ -71,6 +79,8 @@ export function buildScore(raw: RawScore): Score {
   };
 }
 
+const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
+
 /**
  * Append one part's events to `out` ordered by onset, then staff, then pitch (rests first); stable
  * otherwise. Sorts an index array on precomputed keys rather than the events themselves.
@@ -80,11 +90,15 @@ function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
   const t = new Float64Array(n);
   const staff = new Float64Array(n);
   const midi = new Float64Array(n);
+  // A float of n/d with n and d below 2^53 is correctly rounded, so when two such floats differ
+  // they order the exact values; otherwise the exact comparison decides.
+  const floatExact = new Uint8Array(n);
   const order = new Array<number>(n);
   let sorted = true;
   for (let i = 0; i < n; i++) {
     const e = events[i];
     t[i] = e.onset.valueOf();
+    floatExact[i] = e.onset.n <= SAFE && e.onset.d <= SAFE ? 1 : 0;
     staff[i] = e.staff;
     midi[i] = e.pitch?.midi ?? -1;
     order[i] = i;
@@ -92,6 +106,7 @@ function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
   }
   function compare(a: number, b: number): number {
     if (t[a] !== t[b]) {
+      if (floatExact[a] & floatExact[b]) return t[a] < t[b] ? -1 : 1;
       const exact = events[a].onset.compare(events[b].onset);
       if (exact !== 0) return exact;
     }
