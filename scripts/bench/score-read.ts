@@ -18,7 +18,10 @@ export interface BenchResult {
 const STEPS = ["C", "D", "E", "F", "G", "A", "B"];
 const DYNAMICS = ["p", "mf", "f", "mp"];
 
-/** One note as a notation program exports it: stem, beam, F sharp from the key (G major), some fingering. */
+/**
+ * One note as a notation program exports it (stem, beam, F sharp from the key of G major, some
+ * fingering), with its children on three lines.
+ */
 function note(o: {
   step: number; octave: number; staff: 1 | 2; type: "half" | "quarter" | "eighth"; chord?: boolean; beam?: string;
   finger?: number; sharp?: boolean;
@@ -27,22 +30,13 @@ function note(o: {
   const voice = o.staff === 1 ? 1 : 5;
   const duration = o.type === "half" ? 4 : o.type === "quarter" ? 2 : 1;
   const stem = o.staff === 1 ? (oct >= 5 ? "down" : "up") : oct >= 3 ? "down" : "up";
-  return `      <note>
-${o.chord ? "        <chord/>\n" : ""}        <pitch>
-          <step>${STEPS[o.step % 7]}</step>
-${o.sharp ? "          <alter>1</alter>\n" : ""}          <octave>${oct}</octave>
-          </pitch>
-        <duration>${duration}</duration>
-        <voice>${voice}</voice>
-        <type>${o.type}</type>
-        <stem>${stem}</stem>
-        <staff>${o.staff}</staff>
-${o.beam ? `        <beam number="1">${o.beam}</beam>\n` : ""}${o.finger ? `        <notations>
-          <technical>
-            <fingering>${o.finger}</fingering>
-            </technical>
-          </notations>
-` : ""}        </note>
+  const alter = o.sharp ? "<alter>1</alter>" : "";
+  const beam = o.beam ? `\n  <beam number="1">${o.beam}</beam>` : "";
+  const finger = o.finger ? `\n  <notations><technical><fingering>${o.finger}</fingering></technical></notations>` : "";
+  return `<note>${o.chord ? "<chord/>" : ""}
+  <pitch><step>${STEPS[o.step % 7]}</step>${alter}<octave>${oct}</octave></pitch>
+  <duration>${duration}</duration><voice>${voice}</voice><type>${o.type}</type><stem>${stem}</stem><staff>${o.staff}</staff>${beam}${finger}
+</note>
 `;
 }
 
@@ -74,21 +68,22 @@ function bar(b: number): string {
         <sound dynamics="${70 + (b % 3) * 10}"/>
         </direction>\n`);
   }
-  // Right hand: a quarter-note melody with a third below it on the downbeat.
-  for (let i = 0; i < 4; i++) {
+  // Right hand: a melody in beamed eighths, a third below it on the downbeat.
+  for (let i = 0; i < 8; i++) {
     const step = 7 + ((b * 3 + i * 2) % 9);
-    out.push(note({ step, octave: 4, staff: 1, type: "quarter", finger: i % 2 === 0 ? (step % 5) + 1 : undefined, sharp: step % 7 === 3 }));
-    if (i === 0) out.push(note({ step: step - 2, octave: 4, staff: 1, type: "quarter", chord: true }));
+    const beam = i % 4 === 0 ? "begin" : i % 4 === 3 ? "end" : "continue";
+    out.push(note({ step, octave: 4, staff: 1, type: "eighth", beam, finger: i % 4 === 0 ? (step % 5) + 1 : undefined, sharp: step % 7 === 3 }));
+    if (i === 0) out.push(note({ step: step - 2, octave: 4, staff: 1, type: "eighth", chord: true }));
   }
-  out.push("      <backup>\n        <duration>8</duration>\n        </backup>\n");
-  // Left hand: a broken chord in beamed eighths, then its root held as a half note.
+  out.push("<backup><duration>8</duration></backup>\n");
+  // Left hand: a broken chord in beamed eighths, then two quarters.
   const root = (b % 5) + 7;
   for (let i = 0; i < 4; i++) {
     const beam = i === 0 ? "begin" : i === 3 ? "end" : "continue";
-    const step = root + [0, 4, 2, 4][i];
-    out.push(note({ step, octave: 2, staff: 2, type: "eighth", beam, finger: i === 0 ? 5 : undefined }));
+    out.push(note({ step: root + [0, 4, 2, 4][i], octave: 2, staff: 2, type: "eighth", beam, finger: i === 0 ? 5 : undefined }));
   }
-  out.push(note({ step: root, octave: 2, staff: 2, type: "half" }));
+  out.push(note({ step: root + 4, octave: 2, staff: 2, type: "quarter" }));
+  out.push(note({ step: root, octave: 2, staff: 2, type: "quarter", finger: 5 }));
   if (b % 16 === 15) out.push(`      <barline location="right"><bar-style>light-light</bar-style></barline>\n`);
   out.push("      </measure>\n");
   return out.join("");
@@ -96,7 +91,7 @@ function bar(b: number): string {
 
 /**
  * A partwise two-staff piano file laid out as a notation program exports it (about 3 KB a bar):
- * a right-hand melody in quarters with thirds, left-hand broken chords in beamed eighths and a held half note, stems,
+ * a right-hand melody in eighths with thirds, left-hand broken chords in eighths and quarters, stems,
  * beams, some fingering and dynamics, print and layout elements.
  *
  * @example
