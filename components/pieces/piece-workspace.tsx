@@ -60,15 +60,6 @@ export function PieceWorkspace({
           </label>
           <span className="text-xs text-muted">A quiet overlay: darker bars are harder for the hand, from the fingering model.</span>
         </div>
-        <ScoreView
-          musicxml={data.musicxml}
-          selection={selection}
-          onSelectionChange={setSelection}
-          onConfirm={setSelection}
-          heat={showHeat ? data.heat : null}
-          cursorTime={cursor}
-          label={title}
-        />
         <Player
           key={selection ? `${selection.from}-${selection.to}-${selection.hand}` : "all"}
           events={play.events}
@@ -81,6 +72,15 @@ export function PieceWorkspace({
           bars={barMarks}
           onCursor={setCursor}
           label={selection ? `Play ${describe(selection)}` : `Play ${title}`}
+        />
+        <ScoreView
+          musicxml={data.musicxml}
+          selection={selection}
+          onSelectionChange={setSelection}
+          onConfirm={setSelection}
+          heat={showHeat ? data.heat : null}
+          cursorTime={cursor}
+          label={title}
         />
       </div>
       <aside className="flex flex-col gap-6" aria-label="Knot and difficulty">

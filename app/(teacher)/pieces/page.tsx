@@ -15,7 +15,7 @@ export default async function PiecesPage() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Pieces" lead="The scores in your studio. Knotwork keeps a cleaned copy of each file you upload." />
-      <div className="grid gap-6 lg:grid-cols-[20rem_1fr] lg:items-start">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[20rem_minmax(0,1fr)] lg:items-start">
         <Card>
           <h2 className="mb-3 text-lg font-semibold">Upload a piece</h2>
           <UploadForm />

@@ -1,0 +1,180 @@
+// The teacher's piece workflow through the real pages: upload, table, piece page, bar selection by
+// mouse and by keyboard, knot saved and listed; hostile files refused with nothing stored; axe checks.
+import fs from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { createClient, type Client } from "@libsql/client";
+import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { describeViolations, seriousViolations } from "./axe";
+import { launchChromium, shoot } from "./chromium";
+import { repoRoot } from "./server";
+
+const baseURL = inject("baseURL");
+const uploadsDir = inject("uploadsDir");
+let browser: Browser;
+let dbClient: Client;
+let tmp: string;
+const UPLOAD_TITLE = "Pebble Study (upload check)";
+
+beforeAll(async () => {
+  browser = await launchChromium();
+  dbClient = createClient({ url: `file:${inject("databaseFile")}` });
+  tmp = fs.mkdtempSync(path.join(os.tmpdir(), "knotwork-pieces-"));
+  // A demo fixture piece under its own title, so it is told apart from the seeded copy.
+  const xml = fs.readFileSync(path.join(repoRoot, "fixtures/pieces/pebble-study.musicxml"), "utf8");
+  fs.writeFileSync(path.join(tmp, "pebble-upload.musicxml"), xml.replace(/<work-title>[^<]*<\/work-title>/, `<work-title>${UPLOAD_TITLE}</work-title>`));
+});
+afterAll(async () => {
+  dbClient?.close();
+  await browser?.close();
+  fs.rmSync(tmp, { recursive: true, force: true });
+});
+
+async function signedIn(width: number) {
+  const context = await browser.newContext({ viewport: { width, height: 900 }, baseURL });
+  const page = await context.newPage();
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill("teacher@knotwork.test");
+  await page.getByLabel("Password").fill("practise-slowly");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL("**/home");
+  return { context, page };
+}
+
+const scoreRows = async () => Number((await dbClient.execute("select count(*) as n from score")).rows[0]!.n);
+const storedFiles = () => (fs.existsSync(uploadsDir) ? fs.readdirSync(uploadsDir).length : 0);
+
+async function upload(page: Page, file: string) {
+  await page.locator('input[type="file"]').setInputFiles(file);
+  const box = page.getByLabel("This piece is in the public domain or my own work.");
+  if (!(await box.isChecked())) await box.check();
+  await page.getByRole("button", { name: "Upload piece" }).click();
+}
+
+async function cellCentre(page: Page, bar: number, staff: number) {
+  return page.$eval(`[data-bar="${bar}"][data-staff="${staff}"]`, (el) => {
+    el.scrollIntoView({ block: "center" });
+    const r = el.getBoundingClientRect();
+    return { x: r.x + r.width / 2, y: r.y + r.height / 2 };
+  });
+}
+
+async function tabTo(page: Page, selector: string, max = 200) {
+  for (let i = 0; i < max; i++) {
+    if (await page.evaluate((s) => document.activeElement?.matches(s) ?? false, selector)) return;
+    await page.keyboard.press("Tab");
+  }
+  throw new Error(`Tab never reached ${selector}`);
+}
+
+describe("pieces in the browser", () => {
+  test("upload through the form, open the piece, mark a knot by mouse and one by keyboard", async () => {
+    const { context, page } = await signedIn(1280);
+    await page.goto("/pieces");
+    // The cap is shown before any upload.
+    expect(await page.getByText("up to 5 MB").isVisible()).toBe(true);
+    const rows = await scoreRows();
+    await upload(page, path.join(tmp, "pebble-upload.musicxml"));
+    await page.getByText(`Uploaded ${UPLOAD_TITLE}`).waitFor();
+    const link = page.getByRole("table", { name: "Pieces" }).getByRole("link", { name: UPLOAD_TITLE });
+    await link.waitFor();
+    expect(await scoreRows()).toBe(rows + 1);
+    expect(storedFiles()).toBe(1);
+
+    await link.click();
+    await page.waitForURL("**/pieces/*");
+    await page.waitForSelector('section[data-status="ready"]', { timeout: 90_000 });
+    // Right hand (staff 0), bars at indexes 2 and 3: click, then shift-click.
+    let c = await cellCentre(page, 2, 0);
+    await page.mouse.click(c.x, c.y);
+    c = await cellCentre(page, 3, 0);
+    await page.keyboard.down("Shift");
+    await page.mouse.click(c.x, c.y);
+    await page.keyboard.up("Shift");
+    expect(await page.locator('[data-staff="0"][data-selected="true"]').count()).toBe(2);
+    expect(await page.locator('[data-staff="1"][data-selected="true"]').count()).toBe(0);
+    // fixtures/pieces/README.md: Pebble Study has no pickup, so indexes 2–3 are printed bars 3–4.
+    expect(await page.getByTestId("knot-selection").textContent()).toContain("bars 3–4, right hand");
+    await page.getByText("evenness", { exact: true }).click();
+    await page.getByRole("button", { name: "Save knot" }).click();
+    await page.getByText("Knot saved: bars 3–4, right hand.").waitFor();
+    const knots = page.getByRole("list", { name: "Knots" });
+    await knots.getByText("bars 3–4 · right hand").waitFor();
+    expect(await knots.getByText("evenness").count()).toBe(1);
+
+    // Keyboard only: into the score, bar index 1 → extend to 2, confirm, tag, save.
+    await page.reload();
+    await page.waitForSelector('section[data-status="ready"]', { timeout: 90_000 });
+    await tabTo(page, '[data-testid="score-frame"]');
+    await page.keyboard.press("ArrowRight");
+    await page.keyboard.press("Shift+ArrowRight");
+    await page.keyboard.press("Enter");
+    expect(await page.getByTestId("knot-selection").textContent()).toContain("bars 2–3, right hand");
+    await tabTo(page, 'input[type="checkbox"]:not([aria-invalid])');
+    while (!(await page.evaluate(() => document.activeElement?.parentElement?.textContent === "evenness"))) await page.keyboard.press("Tab");
+    await page.keyboard.press("Space");
+    await tabTo(page, 'button[type="submit"]');
+    await page.keyboard.press("Enter");
+    await page.getByText("Knot saved: bars 2–3, right hand.").waitFor();
+    await knots.getByText("bars 2–3 · right hand").waitFor();
+
+    await page.goto("/knots");
+    expect(await page.getByRole("link", { name: new RegExp(`${UPLOAD_TITLE.replace(/[()]/g, "\\$&")}.*bars 3–4`) }).count()).toBe(1);
+
+    // Delete with confirmation: the dialog names the two knots; row, knots and file go together.
+    await page.goto("/pieces");
+    await page.getByRole("button", { name: `Delete ${UPLOAD_TITLE}` }).click();
+    const dialog = page.getByRole("dialog");
+    expect(await dialog.getByText("Its 2 knots are removed too.").isVisible()).toBe(true);
+    await dialog.getByRole("button", { name: "Delete piece" }).click();
+    await dialog.waitFor({ state: "hidden" });
+    await page.getByRole("table", { name: "Pieces" }).getByRole("link", { name: UPLOAD_TITLE }).waitFor({ state: "detached" });
+    expect(await scoreRows()).toBe(rows);
+    expect(storedFiles()).toBe(0);
+    await context.close();
+  });
+
+  test("each hostile file is refused through the real form with a clear message and nothing stored", async () => {
+    const { context, page } = await signedIn(1280);
+    await page.goto("/pieces");
+    const dir = path.join(repoRoot, "fixtures/hostile");
+    for (const name of fs.readdirSync(dir).sort()) {
+      const rows = await scoreRows();
+      const files = storedFiles();
+      await upload(page, path.join(dir, name));
+      const alert = page.getByRole("alert").filter({ hasText: name });
+      await alert.waitFor();
+      expect((await alert.textContent())!.length, name).toBeGreaterThan(name.length + 20);
+      expect(await scoreRows(), name).toBe(rows);
+      expect(storedFiles(), name).toBe(files);
+    }
+    await shoot(page, "pieces-refused-1280");
+    await context.close();
+  });
+
+  test("pieces and piece pages pass axe (no serious or critical) and look finished at 390 and 1280 px", async () => {
+    for (const width of [1280, 390]) {
+      const { context, page } = await signedIn(width);
+      await page.goto("/pieces");
+      await page.getByRole("table", { name: "Pieces" }).waitFor();
+      let found = await seriousViolations(page);
+      expect(found, describeViolations(found)).toEqual([]);
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+      expect(overflow).toBeLessThanOrEqual(0);
+      await shoot(page, `pieces-${width}`);
+
+      await page.getByRole("table", { name: "Pieces" }).getByRole("link", { name: "Lantern Waltz" }).click();
+      await page.waitForSelector('section[data-status="ready"]', { timeout: 90_000 });
+      await page.getByLabel("Show difficulty").check();
+      await page.getByRole("heading", { name: "Hardest bars" }).waitFor();
+      found = await seriousViolations(page);
+      expect(found, describeViolations(found)).toEqual([]);
+      await shoot(page, `piece-${width}`);
+      // Picking a hardest bar selects it in the score.
+      await page.getByRole("heading", { name: "Hardest bars" }).locator("xpath=..").getByRole("button").first().click();
+      expect(await page.locator('[data-selected="true"]').count()).toBeGreaterThan(0);
+      await context.close();
+    }
+  });
+});
