@@ -34,7 +34,9 @@ export default async function Landing() {
           ) : (
             <>
               <ButtonLink href="/sign-in" variant="quiet">Sign in</ButtonLink>
-              <ButtonLink href="/sign-up" className="hidden sm:inline-flex">Create a studio</ButtonLink>
+              <span className="hidden sm:block">
+                <ButtonLink href="/sign-up">Create a studio</ButtonLink>
+              </span>
             </>
           )}
         </nav>
