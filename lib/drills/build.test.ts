@@ -1,6 +1,7 @@
 import Fraction from "fraction.js";
 import { describe, expect, test } from "vitest";
 import { barLength, buildDrill, defaultTempo, leadOf, makeContext, restSlot, sonoritySlot, writtenPieces } from "./build";
+import { estimateFingering } from "./fingering";
 import { pitchFromName } from "./spell";
 import { makePassage } from "./test-passages";
 import type { Drill } from "./types";
@@ -113,5 +114,16 @@ describe("buildDrill", () => {
     expect(defaultTempo(makePassage({ right: "C4/4", tempo: 100 }))).toEqual({ start: 60, target: 100 });
     expect(defaultTempo(makePassage({ right: "C4/4" })).target).toBe(80);
     expect(restSlot(q(1, 2)).notes).toEqual([]);
+  });
+});
+
+describe("fingering carried from the passage", () => {
+  test("a drill that plays the passage as written is fingered as the passage's own estimate", () => {
+    const p = makePassage({ right: "E4/8 F4/8 G4/8 A4/8 B4/8 C5/8 D5/8 E5/8" });
+    const slots = p.sonorities.right.map((s) => sonoritySlot(s));
+    const d = buildDrill(p, { ...spec, segments: [{ right: slots }, { right: slots }] }, makeContext());
+    const own = estimateFingering(p.events, "right").fingers;
+    const drillFingers = d.score.events.filter((e) => e.pitch).map((e) => e.fingering?.[0]?.finger);
+    expect(drillFingers).toEqual([...own, ...own]);
   });
 });

@@ -8,7 +8,7 @@ import type { Clef, Hand, Measure, NoteEvent, Passage, Score, Sonority, TimeSign
 import type { Drill, DrillContext, DrillWarning, HandProfile, SpanReport } from "./types";
 import { barLength, laySegments, type LaidEvent, type Segment, type Slot, type SlotNote } from "./layout";
 import { mulberry32 } from "./rng";
-import { addEstimatedFingering, measureSpan, PROFILE } from "./span";
+import { addEstimatedFingering, measureSpan, newFingeringMemo, PROFILE, type FingeringMemo } from "./span";
 
 export { barLength, writtenPieces, laySegments } from "./layout";
 export type { Segment, Slot, SlotNote } from "./layout";
@@ -38,8 +38,13 @@ export interface DrillSpec {
  * @example
  * const ctx = makeContext({ seed: 7 });
  */
-export function makeContext(o: { profile?: HandProfile; seed?: number; safety?: boolean } = {}): DrillContext {
-  return { profile: o.profile ?? PROFILE, rng: mulberry32(o.seed ?? 1), safety: o.safety ?? true };
+export function makeContext(o: { profile?: HandProfile; seed?: number; safety?: boolean; fingeringMemo?: FingeringMemo } = {}): DrillContext {
+  return {
+    profile: o.profile ?? PROFILE,
+    rng: mulberry32(o.seed ?? 1),
+    safety: o.safety ?? true,
+    fingeringMemo: o.fingeringMemo ?? newFingeringMemo(),
+  };
 }
 
 /**
@@ -149,15 +154,46 @@ export function leadOf(passage: Passage): Fraction {
 }
 
 function clefFor(hand: Hand, staff: number, events: readonly LaidEvent[]): Clef {
-  const midis = events.filter((e) => e.hand === hand && e.pitch).map((e) => e.pitch!.midi);
-  const mean = midis.length ? midis.reduce((a, b) => a + b, 0) / midis.length : hand === "right" ? 67 : 50;
+  let sum = 0;
+  let count = 0;
+  for (const e of events) if (e.hand === hand && e.pitch) { sum += e.pitch.midi; count++; }
+  const mean = count ? sum / count : hand === "right" ? 67 : 50;
   const treble = hand === "right" ? mean >= 55 : mean > 65;
   return treble ? { staff, sign: "G", line: 2 } : { staff, sign: "F", line: 4 };
 }
 
-function lcm(a: number, b: number): number {
-  const gcd = (x: number, y: number): number => (y === 0 ? x : gcd(y, x % y));
-  return (a / gcd(a, b)) * b;
+function gcd(x: number, y: number): number {
+  while (y !== 0) [x, y] = [y, x % y];
+  return x;
+}
+
+/** Least common multiple of every onset and duration denominator: the MusicXML divisions. */
+function divisionsOf(events: readonly LaidEvent[]): number {
+  const seen = new Set<number>();
+  let divisions = 1;
+  for (const e of events) {
+    for (const d of [Number(e.onset.d), Number(e.duration.d)]) {
+      if (seen.has(d)) continue;
+      seen.add(d);
+      divisions = (divisions / gcd(divisions, d)) * d;
+    }
+  }
+  return divisions;
+}
+
+/** A laid event as a score event on its staff (one voice per staff). */
+function toEvent(l: LaidEvent, id: string, staff: number): NoteEvent {
+  const e: { -readonly [K in keyof NoteEvent]: NoteEvent[K] } = {
+    measure: l.measure, onset: l.onset, duration: l.duration, written: l.written, pitch: l.pitch, chord: l.chord, tie: l.tie,
+    id, part: "P1", staff, voice: String(staff),
+  };
+  if (l.grace !== undefined) e.grace = l.grace;
+  if (l.fingering !== undefined) e.fingering = l.fingering;
+  if (l.fingeringSource !== undefined) e.fingeringSource = l.fingeringSource;
+  if (l.marks !== undefined) e.marks = l.marks;
+  if (l.dynamic !== undefined) e.dynamic = l.dynamic;
+  if (l.words !== undefined) e.words = l.words;
+  return e;
 }
 
 /**
@@ -174,8 +210,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const staffOf = (h: Hand) => (hands.length === 2 && h === "left" ? 2 : 1);
   const clefs = hands.map((h) => clefFor(h, staffOf(h), laid));
 
-  let divisions = 1;
-  for (const e of laid) divisions = lcm(divisions, lcm(Number(e.onset.d), Number(e.duration.d)));
+  const divisions = divisionsOf(laid);
 
   const measures: Measure[] = Array.from({ length: bars }, (_, i) => ({
     index: i,
@@ -191,17 +226,19 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
     ...(tempos.has(i) ? { tempo: tempos.get(i) } : {}),
   }));
 
-  const ordered = [...laid].sort(
-    (a, b) => a.onset.compare(b.onset) || staffOf(a.hand) - staffOf(b.hand) || (a.pitch?.midi ?? -1) - (b.pitch?.midi ?? -1),
+  // Sort by onset, staff, then pitch (the sort is stable). Onsets are compared as numbers: drill
+  // onsets have small denominators, so two different onsets never round to the same double.
+  const onsetKey = Float64Array.from(laid, (e) => e.onset.valueOf());
+  const staffKey = Int8Array.from(laid, (e) => staffOf(e.hand));
+  const pitchKey = Int16Array.from(laid, (e) => e.pitch?.midi ?? -1);
+  const order = Array.from(laid, (_, i) => i).sort(
+    (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || pitchKey[a]! - pitchKey[b]!,
   );
-  let events: NoteEvent[] = ordered.map(({ hand, ...e }, i) => ({
-    ...e,
-    id: `e${i + 1}`,
-    part: "P1",
-    staff: staffOf(hand),
-    voice: String(staffOf(hand)),
-  }));
-  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right");
+  const ordered = order.map((i) => laid[i]!);
+  const sources = ordered.map((e) => e.source);
+  let events: NoteEvent[] = ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand)));
+  const memo = ctx.fingeringMemo ?? newFingeringMemo();
+  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right", { passage, sources, memo });
 
   const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
   const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));

@@ -24,6 +24,10 @@ export interface SliceSet {
 }
 
 const COMBOS: readonly (readonly number[])[][] = buildCombos();
+/** One-finger states, by finger (shared, never changed). */
+const SINGLE: readonly (readonly (readonly number[])[])[] = [1, 2, 3, 4, 5].map((f) => [[f]]);
+/** The same tuples falling, for the left hand (built once). */
+const REVERSED: readonly (readonly number[])[][] = COMBOS.map((ts) => ts.map((t) => [...t].reverse()));
 
 function buildCombos(): (readonly number[])[][] {
   const byLength: (readonly number[])[][] = [[], [], [], [], [], []];
@@ -43,8 +47,8 @@ function buildCombos(): (readonly number[])[][] {
  * candidateStates(1, "left", [3]) // [[3]]
  */
 export function candidateStates(count: number, hand: Hand, fixed: readonly (number | null)[]): (readonly number[])[] {
-  const base = COMBOS[count] ?? [];
-  const oriented = hand === "right" ? base : base.map((t) => [...t].reverse());
+  const oriented = (hand === "right" ? COMBOS : REVERSED)[count] ?? [];
+  if (fixed.every((f) => f == null)) return oriented;
   const ok = oriented.filter((t) => t.every((f, i) => fixed[i] == null || fixed[i] === f));
   return ok.length > 0 ? ok : oriented;
 }
@@ -63,19 +67,20 @@ function keepFive(midis: number[]): number[] {
 
 /**
  * Group one hand's events into slices. Rests are skipped; a note continuing a tie keeps the finger of
- * the note it continues; grace notes come before the note they ornament, each on its own.
+ * the note it continues; grace notes come before the note they ornament, each on its own. `hints`
+ * (per event, null = none) narrow a slice's candidates when they fit it; written fingerings win.
  *
  * @example
  * buildSlices(events, "right").slices.length // number of distinct onsets with struck notes
  */
-export function buildSlices(events: readonly NoteEvent[], hand: Hand): SliceSet {
+export function buildSlices(events: readonly NoteEvent[], hand: Hand, hints?: readonly (number | null)[]): SliceSet {
   const order = events.map((_, i) => i).filter((i) => events[i]!.pitch !== null);
-  const onset = order.map((i) => events[i]!.onset.valueOf());
-  const rank = new Map(order.map((i, k) => [i, k]));
+  const onset = new Float64Array(events.length);
+  for (const i of order) onset[i] = events[i]!.onset.valueOf();
   order.sort((a, b) => {
     const ea = events[a]!;
     const eb = events[b]!;
-    const d = onset[rank.get(a)!]! - onset[rank.get(b)!]!;
+    const d = onset[a]! - onset[b]!;
     if (d !== 0) return d;
     if (!!ea.grace !== !!eb.grace) return ea.grace ? -1 : 1;
     return a - b;
@@ -101,11 +106,25 @@ export function buildSlices(events: readonly NoteEvent[], hand: Hand): SliceSet 
     prevKey = key;
   }
   const slices = groups.map((g): Slice => {
+    if (g.length === 1) {
+      // A single note (the common case): its written finger, else its hint, else any finger.
+      const i = g[0]!;
+      const f = givenFinger(events[i]!) ?? hints?.[i] ?? null;
+      const states = f !== null && f >= 1 && f <= 5 ? SINGLE[f - 1]! : COMBOS[1]!;
+      return { midis: [events[i]!.pitch!.midi], members: [g], states, measure: events[i]!.measure };
+    }
     const all = [...new Set(g.map((i) => events[i]!.pitch!.midi))].sort((a, b) => a - b);
     const midis = keepFive(all);
     const members = midis.map((m) => g.filter((i) => events[i]!.pitch!.midi === m));
-    const fixed = members.map((ms) => ms.map((i) => givenFinger(events[i]!)).find((f) => f !== null) ?? null);
-    return { midis, members, states: candidateStates(midis.length, hand, fixed), measure: events[g[0]!]!.measure };
+    const given = members.map((ms) => ms.map((i) => givenFinger(events[i]!)).find((f) => f !== null) ?? null);
+    let states = candidateStates(midis.length, hand, given);
+    if (hints) {
+      // A hint (a finger carried over from elsewhere) narrows the choice only when it fits the slice.
+      const hinted = members.map((ms, j) => given[j] ?? ms.map((i) => hints[i] ?? null).find((f) => f !== null) ?? null);
+      const narrowed = states.filter((t) => t.every((f, j) => hinted[j] == null || hinted[j] === f));
+      if (narrowed.length > 0) states = narrowed;
+    }
+    return { midis, members, states, measure: events[g[0]!]!.measure };
   });
   return { slices, tiedTo };
 }

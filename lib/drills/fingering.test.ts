@@ -85,3 +85,18 @@ describe("estimateFingering — behaviour", () => {
     expect(estimateFingering(buildNotes(["C4"]), "right").fingers).toHaveLength(1);
   });
 });
+
+describe("estimateFingering — hints", () => {
+  // Common practice: C D E F G with the hand in one position is 1-2-3-4-5; a hint of 2 on C moves the hand.
+  test("a hint that fits is followed; written fingerings still win", () => {
+    const events = buildNotes(names("C4 D4 E4 F4 G4"));
+    expect(estimateFingering(events, "right", { hints: [2, null, null, null, null] }).fingers[0]).toBe(2);
+    expect(estimateFingering(events, "right", { hints: [1, 2, 3, 4, 5], costs: false }).fingers).toEqual([1, 2, 3, 4, 5]);
+  });
+  test("a chord's hints that cannot be played together (1 on the top note, 3 below) are ignored", () => {
+    const t = new Fraction(0);
+    const chord: NoteEvent[] = buildNotes(names("C4 E4 G4")).map((e, i) => ({ ...e, onset: t, chord: i > 0 }));
+    const { fingers } = estimateFingering(chord, "right", { hints: [3, null, 1] });
+    expect(fingers[0]! < fingers[1]! && fingers[1]! < fingers[2]!).toBe(true); // right-hand chord fingers rise with pitch
+  });
+});

@@ -23,6 +23,13 @@ import {
 
 export interface FingeringOptions {
   readonly model?: FingeringModel;
+  /**
+   * Preferred finger per input event (null = none), e.g. carried over from the passage a drill note
+   * comes from. A hint is followed when it fits its chord; unlike a written fingering it is not forced.
+   */
+  readonly hints?: readonly (number | null)[];
+  /** When false, only `fingers` is filled (costs stay empty), which is much faster. Default true. */
+  readonly costs?: boolean;
 }
 
 export interface FingeringResult {
@@ -138,6 +145,7 @@ function trioRank(a: Slice, fa: readonly number[], b: Slice, fb: readonly number
 function search(slices: readonly Slice[], hand: Hand, model: FingeringModel): number[] {
   const n = slices.length;
   if (n === 0) return [];
+  if (slices.every((s) => s.states.length === 1)) return new Array<number>(n).fill(0); // nothing to choose
   const scratch = emptyCosts();
   const stat = slices.map((s, i) => s.states.map((st) => { clearCosts(scratch); sliceCosts(slices, i, st, hand, model, scratch); return rank(scratch) + chordTieBreak(st); }));
   if (n === 1) return [argmin(stat[0]!)];
@@ -191,12 +199,20 @@ function argmin(xs: readonly number[]): number {
  */
 export function estimateFingering(events: readonly NoteEvent[], hand: Hand, options: FingeringOptions = {}): FingeringResult {
   const model = options.model ?? "parncutt";
-  const { slices, tiedTo } = buildSlices(events, hand);
+  const { slices, tiedTo } = buildSlices(events, hand, options.hints);
   const path = search(slices, hand, model);
   const fingers: (number | null)[] = events.map(() => null);
   const costPerNote = events.map(() => 0);
   const costPerBar = new Map<number, number>();
   const rulesPerBar = new Map<number, RuleCosts>();
+  if (options.costs === false) {
+    slices.forEach((slice, s) => {
+      const state = slice.states[path[s]!]!;
+      slice.members.forEach((ms, j) => ms.forEach((i) => { fingers[i] = scoreFinger(events[i]!) ?? state[j]!; }));
+    });
+    for (const [i, from] of tiedTo) fingers[i] = fingers[from] ?? null;
+    return { fingers, costPerNote, costPerBar, rulesPerBar };
+  }
   slices.forEach((slice, s) => {
     const state = slice.states[path[s]!]!;
     const rules = emptyCosts();

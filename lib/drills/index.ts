@@ -5,6 +5,7 @@
 import type { Passage } from "../score/types";
 import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
+import { newFingeringMemo } from "./span";
 import { blocking } from "./families/blocking";
 import { doubles } from "./families/doubles";
 import { heldTone } from "./families/held-tone";
@@ -80,6 +81,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
   const ids = opts.families ?? Object.keys(families);
   const drills: Drill[] = [];
   const skipped: { family: string; reason: string }[] = [];
+  const fingeringMemo = newFingeringMemo();
   for (const id of ids) {
     const family = families[id];
     if (!family) {
@@ -87,7 +89,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
       continue;
     }
     const options = family.options.parse(opts.options?.[id] ?? {});
-    const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety });
+    const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo });
     const result = family.generate(passage, options, ctx);
     drills.push(...result.drills);
     if (result.drills.length === 0) skipped.push({ family: id, reason: result.skipped ?? "No drill of this family fits the passage." });

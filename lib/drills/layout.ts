@@ -38,6 +38,8 @@ export interface Segment {
 /** A laid-out hand: events without ids yet, plus the number of bars used. */
 export interface LaidEvent extends Omit<NoteEvent, "id" | "part" | "staff" | "voice"> {
   readonly hand: Hand;
+  /** The passage note this note plays (its fingering can be carried over). */
+  readonly source?: NoteEvent;
 }
 
 const BASES: readonly [string, Fraction][] = [
@@ -79,6 +81,23 @@ export function barLength(time: TimeSignature): Fraction {
  * writtenPieces(new Fraction(1, 3), { actual: 3, normal: 2 })[0].written.type; // "eighth"
  */
 export function writtenPieces(
+  duration: Fraction,
+  tuplet?: { actual: number; normal: number },
+): { duration: Fraction; written: Written }[] {
+  const key = `${duration.s < 0 ? "-" : ""}${duration.n}/${duration.d}:${tuplet ? `${tuplet.actual}/${tuplet.normal}` : ""}`;
+  let found = PIECES.get(key);
+  if (!found) {
+    found = computePieces(duration, tuplet);
+    if (PIECES.size > 4096) PIECES.clear();
+    PIECES.set(key, found);
+  }
+  return found.map((p) => ({ duration: p.duration, written: { ...p.written, tuplet: p.written.tuplet ? { ...p.written.tuplet } : null } }));
+}
+
+/** Written pieces by duration and tuplet: a pure function of a few hundred inputs, so kept. */
+const PIECES = new Map<string, readonly { duration: Fraction; written: Written }[]>();
+
+function computePieces(
   duration: Fraction,
   tuplet?: { actual: number; normal: number },
 ): { duration: Fraction; written: Written }[] {
@@ -126,32 +145,34 @@ function layHand(
   let t = start;
   for (const slot of slots) {
     const slotEnd = t.add(slot.duration);
-    const pieces: { onset: Fraction; duration: Fraction; written: Written }[] = [];
+    const pieces: { onset: Fraction; duration: Fraction; written: Written; measure: number }[] = [];
     let cursor = t;
     while (cursor.compare(slotEnd) < 0) {
-      const barEnd = cursor.div(bar).floor().add(1).mul(bar);
+      const measure = cursor.div(bar).floor().valueOf();
+      const barEnd = bar.mul(measure + 1);
       const chunkEnd = barEnd.compare(slotEnd) < 0 ? barEnd : slotEnd;
       for (const p of writtenPieces(chunkEnd.sub(cursor), slot.tuplet)) {
-        pieces.push({ onset: cursor, duration: p.duration, written: p.written });
+        pieces.push({ onset: cursor, duration: p.duration, written: p.written, measure });
         cursor = cursor.add(p.duration);
       }
     }
+    const sorted = slot.notes.length > 1 ? [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi) : slot.notes;
+    const extra: { marks?: readonly NoteMark[]; words?: string; dynamic?: string } = {};
+    if (slot.marks !== undefined) extra.marks = slot.marks;
+    if (slot.words !== undefined) extra.words = slot.words;
+    if (slot.dynamic !== undefined) extra.dynamic = slot.dynamic;
     pieces.forEach((p, i) => {
-      const measure = p.onset.div(bar).floor().valueOf();
+      const { measure } = p;
       const first = i === 0;
       const tie = pieces.length === 1 ? "none" : first ? "start" : i === pieces.length - 1 ? "stop" : "continue";
-      const extra = first
-        ? { marks: slot.marks, words: slot.words, dynamic: slot.dynamic }
-        : {};
-      if (slot.notes.length === 0) {
-        events.push({ hand, measure, onset: p.onset, duration: p.duration, written: p.written, pitch: null, chord: false, tie: "none", ...clean(extra) });
+      if (sorted.length === 0) {
+        events.push({ hand, measure, onset: p.onset, duration: p.duration, written: p.written, pitch: null, chord: false, tie: "none", ...(first ? extra : {}) });
         return;
       }
-      const sorted = [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi);
       sorted.forEach((n, k) => {
         const fromScore = first && n.source?.fingering?.length ? n.source.fingering : undefined;
         const chosen = first && !fromScore && n.fingering?.length ? n.fingering : undefined;
-        events.push({
+        const e: LaidEvent = {
           hand,
           measure,
           onset: p.onset,
@@ -160,19 +181,17 @@ function layHand(
           pitch: n.pitch,
           chord: k > 0,
           tie,
+          ...(n.source ? { source: n.source } : {}),
           ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
           ...(chosen ? { fingering: chosen, fingeringSource: "estimated" as const } : {}),
-          ...clean(extra),
-        });
+          ...(first ? extra : {}),
+        };
+        events.push(e);
       });
     });
     t = slotEnd;
   }
   return { events, end: t };
-}
-
-function clean<T extends object>(o: T): Partial<T> {
-  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 }
 
 /** Rests from `from` to `to`, split at barlines. */

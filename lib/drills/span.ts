@@ -2,7 +2,7 @@
  * Span and fingering for drill scores: the widest chord per hand against the hand profile, and
  * estimated fingering for notes the score left unfingered.
  */
-import type { Hand, NoteEvent, Pitch } from "../score/types";
+import type { Hand, NoteEvent, Passage, Pitch } from "../score/types";
 import type { HandProfile, SpanReport } from "./types";
 import { DEFAULT_PROFILE, spanOf } from "./hand";
 import { estimateFingering } from "./fingering";
@@ -18,11 +18,13 @@ export const PROFILE: HandProfile = DEFAULT_PROFILE;
  * measureSpan(drill.score.events.filter((e) => e.staff === 1), PROFILE)?.semitones;
  */
 export function measureSpan(events: readonly NoteEvent[], profile: HandProfile): SpanReport | null {
-  const byOnset = new Map<string, NoteEvent[]>();
+  // Onsets keyed as numbers: different onsets with small denominators never share a double.
+  const byOnset = new Map<number, NoteEvent[]>();
   for (const e of events) {
     if (!e.pitch || e.grace) continue;
-    const k = e.onset.toFraction();
-    byOnset.set(k, [...(byOnset.get(k) ?? []), e]);
+    const k = e.onset.valueOf();
+    const chord = byOnset.get(k);
+    if (chord) chord.push(e); else byOnset.set(k, [e]);
   }
   let worst: SpanReport | null = null;
   for (const chord of byOnset.values()) {
@@ -46,21 +48,101 @@ export function pitchSpan(pitches: readonly Pitch[], profile: HandProfile): Span
 }
 
 /**
+ * Fingering work shared by the drills of one `generateDrills` call: the passage's own estimate per
+ * hand (by passage object) and finished estimates per hand and note sequence.
+ */
+export interface FingeringMemo {
+  readonly passage: WeakMap<Passage, Map<Hand, ReadonlyMap<string, number>>>;
+  readonly sequences: Map<string, readonly (number | null)[]>;
+}
+
+/**
+ * An empty fingering memo.
+ *
+ * @example
+ * const memo = newFingeringMemo();
+ */
+export function newFingeringMemo(): FingeringMemo {
+  return { passage: new WeakMap(), sequences: new Map() };
+}
+
+/**
+ * The passage's estimated (or written) finger per note id for one hand, computed once per memo.
+ *
+ * @example
+ * passageFingers(passage, "right", newFingeringMemo()).get(passage.events[0].id); // 1
+ */
+export function passageFingers(passage: Passage, hand: Hand, memo: FingeringMemo): ReadonlyMap<string, number> {
+  let byHand = memo.passage.get(passage);
+  if (!byHand) memo.passage.set(passage, (byHand = new Map()));
+  let found = byHand.get(hand);
+  if (!found) {
+    const events = passage.events.filter((e) => e.staff === passage.staffOf[hand]);
+    const { fingers } = estimateFingering(events, hand, { costs: false });
+    const map = new Map<string, number>();
+    events.forEach((e, i) => { if (fingers[i] != null) map.set(e.id, fingers[i]!); });
+    byHand.set(hand, (found = map));
+  }
+  return found;
+}
+
+/** Where a drill's notes come from, so the passage's fingering can be carried onto them. */
+export interface FingeringCarry {
+  readonly passage: Passage;
+  /** Per event (same order as the events): the passage note it plays, if any. */
+  readonly sources: readonly (NoteEvent | undefined)[];
+  readonly memo: FingeringMemo;
+}
+
+function sequenceKey(hand: Hand, events: readonly NoteEvent[], hints: readonly (number | null)[] | undefined): string {
+  let key = hand;
+  for (let i = 0; i < events.length; i++) {
+    const e = events[i]!;
+    if (!e.pitch) continue;
+    key += `|${e.pitch.midi}@${e.onset.n}/${e.onset.d}${e.grace ? "g" : ""}${e.tie[0]}${e.fingering?.[0]?.finger ?? ""}:${hints?.[i] ?? ""}`;
+  }
+  return key;
+}
+
+/**
  * Add estimated fingering (marked "estimated", from `estimateFingering`) to unfingered notes, per
  * staff; the score's own fingerings stay as they are and steer the estimate. Tied continuations
- * get no finger.
+ * get no finger. With `carry`, a note that plays a passage note (same key, or octaves apart) is
+ * steered towards the finger the passage's own estimate gives it, so a drill is fingered as the
+ * piece is, and only new notes are searched freely; estimates are shared through the memo.
  *
  * @example
  * addEstimatedFingering(events, () => "right");
  */
-export function addEstimatedFingering(events: NoteEvent[], handOfStaff: (staff: number) => Hand): NoteEvent[] {
+export function addEstimatedFingering(events: NoteEvent[], handOfStaff: (staff: number) => Hand, carry?: FingeringCarry): NoteEvent[] {
   const out = [...events];
-  const staves = [...new Set(events.map((e) => e.staff))];
-  for (const staff of staves) {
-    const idx = events.map((e, i) => (e.staff === staff ? i : -1)).filter((i) => i >= 0);
-    const { fingers } = estimateFingering(idx.map((i) => events[i]), handOfStaff(staff));
+  const byStaff = new Map<number, number[]>();
+  events.forEach((e, i) => {
+    const list = byStaff.get(e.staff);
+    if (list) list.push(i); else byStaff.set(e.staff, [i]);
+  });
+  for (const [staff, idx] of byStaff) {
+    const hand = handOfStaff(staff);
+    const staffEvents = idx.map((i) => events[i]!);
+    let hints: (number | null)[] | undefined;
+    if (carry) {
+      const fromPassage = passageFingers(carry.passage, hand, carry.memo);
+      hints = idx.map((i) => {
+        const src = carry.sources[i];
+        const e = events[i]!;
+        if (!src?.pitch || !e.pitch || src.staff !== carry.passage.staffOf[hand]) return null;
+        if ((e.pitch.midi - src.pitch.midi) % 12 !== 0) return null;
+        return fromPassage.get(src.id) ?? null;
+      });
+    }
+    const key = carry ? sequenceKey(hand, staffEvents, hints) : "";
+    let fingers = carry ? carry.memo.sequences.get(key) : undefined;
+    if (!fingers) {
+      fingers = estimateFingering(staffEvents, hand, { hints, costs: false }).fingers;
+      if (carry) carry.memo.sequences.set(key, fingers);
+    }
     idx.forEach((i, k) => {
-      const e = events[i];
+      const e = events[i]!;
       const f = fingers[k];
       if (!e.pitch || e.fingering?.length || f == null || e.tie === "stop" || e.tie === "continue") return;
       out[i] = { ...e, fingering: [{ finger: f }], fingeringSource: "estimated" };

@@ -3,6 +3,7 @@
  */
 import type { z } from "zod";
 import type { Hand, Passage, Score } from "../score/types";
+import type { FingeringMemo } from "./span";
 
 /** Problem tags a teacher puts on a knot (trade words). */
 export const PROBLEM_TAGS = [
@@ -70,6 +71,8 @@ export interface DrillContext {
   readonly rng: Rng;
   /** When true (default), generators that move notes stay within the profile's span. */
   readonly safety: boolean;
+  /** Fingering estimates shared by the drills of one run (made per context when absent). */
+  readonly fingeringMemo?: FingeringMemo;
 }
 
 /** What a family returns: its drills, or why it does not apply to this passage. */

@@ -16,8 +16,17 @@ export const PIANO_HIGH = 108;
  * @example keyScale({ fifths: 0, mode: "major" }) // ["C", "D", "E", "F", "G", "A", "B"]
  */
 export function keyScale(key: KeySignature): string[] {
-  return Scale.get(keyScaleName(key)).notes;
+  const name = keyScaleName(key);
+  let notes = SCALES.get(name);
+  if (!notes) SCALES.set(name, (notes = Scale.get(name).notes));
+  return [...notes];
 }
+
+/** Scale notes by scale name (at most thirty keys, so kept). */
+const SCALES = new Map<string, readonly string[]>();
+
+/** Shifted pitches by pitch, steps and key (a pure function; cleared when large). */
+const SHIFTS = new Map<string, Pitch>();
 
 /** Where a pitch sits in the key's scale: degree index 0…6 and the chromatic offset from that degree. */
 function scalePosition(p: Pitch, scale: readonly string[]): { degree: number; octave: number; alter: number } {
@@ -37,6 +46,17 @@ function scalePosition(p: Pitch, scale: readonly string[]): { degree: number; oc
  * @example diatonicShift(pitchFromName("E4"), 1, { fifths: 0, mode: "major" }) // F4
  */
 export function diatonicShift(p: Pitch, steps: number, key: KeySignature): Pitch {
+  const memo = `${p.step}${p.alter}${p.octave}|${steps}|${key.fifths}${key.mode}`;
+  let found = SHIFTS.get(memo);
+  if (!found) {
+    found = shiftBySteps(p, steps, key);
+    if (SHIFTS.size > 8192) SHIFTS.clear();
+    SHIFTS.set(memo, found);
+  }
+  return { ...found };
+}
+
+function shiftBySteps(p: Pitch, steps: number, key: KeySignature): Pitch {
   const scale = keyScale(key);
   const pos = scalePosition(p, scale);
   const tonic = `${scale[0]}${pos.octave}`;
