@@ -103,6 +103,13 @@ export async function studioDigest(studioId: string = ids.studioId): Promise<str
       (t) => [t, `select id, updated_at from ${t} where studio_id = ?1 order by id`] as [string, string],
     ),
     ["outbox", `select id, sent_at from outbox where studio_id = ?1 order by id`],
+    // Rows of another studio pointing at this studio's rows (a knot on its piece, a sheet of its knot,
+    // an assignment of its sheet or to its student, an entry on its assignment) — always empty.
+    ["cross-studio", `select 'passage' as t, p.id from passage p join score s on s.id = p.score_id where s.studio_id = ?1 and p.studio_id <> ?1
+      union all select 'sheet', sh.id from sheet sh join passage p on p.id = sh.passage_id where p.studio_id = ?1 and sh.studio_id <> ?1
+      union all select 'assignment', a.id from assignment a join sheet sh on sh.id = a.sheet_id where sh.studio_id = ?1 and a.studio_id <> ?1
+      union all select 'assignment', a.id from assignment a join membership m on m.id = a.student_membership_id where m.studio_id = ?1 and a.studio_id <> ?1
+      union all select 'practice_entry', e.id from practice_entry e join assignment a on a.id = e.assignment_id where a.studio_id = ?1 and e.studio_id <> ?1`],
   ];
   const parts: string[] = [];
   for (const [name, sql] of queries) parts.push(name + JSON.stringify(await query(sql, [studioId])));

@@ -17,6 +17,8 @@ export interface SeedIds {
   assignmentId: string;
   practiceEntryId: string;
   studentMembershipId: string;
+  /** A demo student with no assignment. */
+  secondStudentMembershipId: string;
   invitationId: string;
   invitationToken: string;
   otherStudioId: string;

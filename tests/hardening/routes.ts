@@ -60,6 +60,8 @@ export const PUBLIC_ROUTES: Record<string, string> = {
   "/": "landing page",
   "/sign-in": "sign-in form",
   "/sign-up": "teacher sign-up form",
+  "/forgot-password": "asks for a password-reset e-mail",
+  "/reset-password": "sets a new password with the e-mailed token",
   "/api/health": "liveness probe, no data",
   "/api/auth/[...all]": "better-auth's endpoints (sign-in, sign-out, session); probed by the auth tests",
   "/go": "redirects by role after sign-in, no data",

@@ -37,6 +37,7 @@ async function main(out: string) {
   const { studioId } = await seedDemo(db);
   const teacher = await membershipOf(DEMO_TEACHER.email);
   const student = await membershipOf(DEMO_STUDENTS[0].email);
+  const secondStudent = await membershipOf(DEMO_STUDENTS[1].email);
   const [knot] = await db.select({ id: passage.id, scoreId: passage.scoreId }).from(passage).where(eq(passage.studioId, studioId)).limit(1);
   if (!knot) throw new Error("the demo studio has no knot");
 
@@ -91,6 +92,7 @@ async function main(out: string) {
     assignmentId,
     practiceEntryId: entry.id,
     studentMembershipId: student.id,
+    secondStudentMembershipId: secondStudent.id,
     invitationId: invite.id,
     invitationToken: invite.token,
     otherStudioId: other.data.studioId,
