@@ -6,7 +6,7 @@ import { keyScaleName, pitchName } from "../spell";
 import { makePassage } from "../test-passages";
 import type { Drill } from "../types";
 import { barProblems } from "./shared-2-layout";
-import { generateThumbPairs, pairFingers, thumbPairsOptions } from "./thumb-pairs";
+import { generateThumbPairs, onKeyboard, pairFingers, thumbPairsOptions } from "./thumb-pairs";
 
 const ctx = makeContext();
 const notes = (d: Drill) => d.score.events.filter((e) => e.pitch);
@@ -43,16 +43,35 @@ describe("thumb-pairs", () => {
     expect(fingers(take)).toEqual([1, 2, 3, 1, 2, 3, 1, 2, 3, 1, 2]);
   });
 
+  test("a low left hand (A0 sixteenths, G major): the takeover pattern moves up an octave onto the keyboard", () => {
+    const low = makePassage({ left: "A0/16 A0/16 A0/16 A0/16", key: { fifths: 1, mode: "major" } });
+    const r = generateThumbPairs(low, thumbPairsOptions.parse({}), ctx);
+    // Lowest key A0 = MIDI 21 (FACTS.md §1): from G1 down, the pattern would reach G0 = 19.
+    for (const d of r.drills) for (const e of notes(d)) expect(e.pitch!.midi, d.variant).toBeGreaterThanOrEqual(21);
+    const take = r.drills.find((d) => d.variant === "thumb-takes-3")!;
+    // G major from G2 down (tonal Scale.get("G major")): fingers 1–3, the thumb retaking finger 3's key.
+    expect(names(take)).toEqual(["G2", "F#2", "E2", "E2", "D2", "C2", "C2", "B1", "A1", "A1", "G1"]);
+    expect(fingers(take)).toEqual([1, 2, 3, 1, 2, 3, 1, 2, 3, 1, 2]);
+  });
+
+  test("onKeyboard moves a pattern by whole octaves only when it leaves A0–C8 (FACTS.md §1)", () => {
+    expect(onKeyboard(["A0", "G0"])).toEqual(["A1", "G1"]);
+    expect(onKeyboard(["B7", "D8"])).toEqual(["B6", "D7"]);
+    expect(onKeyboard(["C4", "D4"])).toEqual(["C4", "D4"]);
+  });
+
   test("property: scales equal tonal's Scale.get(...).notes; thumb pairs only ever use {1, k}; bars exact", () => {
     fc.assert(
       fc.property(
         fc.integer({ min: -7, max: 7 }), fc.constantFrom("major", "minor"), fc.constantFrom(2, 3, 4),
-        fc.integer({ min: 1, max: 2 }), fc.constantFrom("right", "left"), fc.integer({ min: 36, max: 84 }),
+        fc.integer({ min: 1, max: 2 }), fc.constantFrom("right", "left"), fc.integer({ min: 21, max: 108 }),
         (fifths, mode, k, octaves, hand, midi) => {
           const key = { fifths, mode };
           const pass = makePassage({ [hand]: `${Note.fromMidiSharps(midi)}/4`, key });
-          const o = thumbPairsOptions.parse({ fingers: [k], octaves, fiveFinger: false });
-          const d = generateThumbPairs(pass, o, ctx).drills[0];
+          const o = thumbPairsOptions.parse({ fingers: [k], octaves, fiveFinger: true });
+          const all = generateThumbPairs(pass, o, ctx).drills;
+          for (const x of all) for (const e of notes(x)) expect(e.pitch!.midi >= 21 && e.pitch!.midi <= 108, x.variant).toBe(true);
+          const d = all[0];
           const expected = Scale.get(keyScaleName(key)).notes;
           const pcs = notes(d).map((e) => Note.pitchClass(pitchName(e.pitch!)));
           for (let i = 0; i < 7 * octaves; i++) expect(pcs[i]).toBe(expected[i % 7]);

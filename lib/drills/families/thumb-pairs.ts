@@ -66,11 +66,32 @@ export function pairFingers(count: number, k: number, hand: Hand): number[] {
 const slotsOf = (names: readonly string[], fingers: readonly number[], value: Fraction): Slot[] =>
   names.map((n, i) => ({ duration: value, notes: [fingered(pitchFromName(n), fingers[i])] }));
 
+/** Lowest and highest piano keys: A0 = MIDI 21, C8 = MIDI 108 (FACTS.md §1). */
+const LOW = 21;
+const HIGH = 108;
+
+/**
+ * The pattern moved by whole octaves onto the keyboard (A0–C8), or null when it is wider than
+ * the keyboard. A pattern that already fits is returned as it is.
+ * @example onKeyboard(["G1", "F#1", "E1", "D1", "C1", "B0", "A0", "G0"]) // an octave up: ["G2", …, "G1"]
+ */
+export function onKeyboard(names: readonly string[]): string[] | null {
+  const midis = names.map((n) => Note.midi(n) ?? NaN);
+  const lo = Math.min(...midis);
+  const hi = Math.max(...midis);
+  if (Number.isNaN(lo) || hi - lo > HIGH - LOW) return null;
+  const octaves = lo < LOW ? Math.ceil((LOW - lo) / 12) : hi > HIGH ? -Math.ceil((hi - HIGH) / 12) : 0;
+  if (octaves === 0) return [...names];
+  const by = `${octaves > 0 ? "" : "-"}${7 * Math.abs(octaves) + 1}P`;
+  return names.map((n) => Note.transpose(n, by));
+}
+
 function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: DrillContext): Drill[] {
   const scale = `${keyTonic(passage.key)}${tonicOctave(passage, hand)} ${keyScaleName(passage.key).split(" ")[1]}`;
   const value = VALUES[o.value];
   const top = 7 * o.octaves;
-  const names = [...scaleNotes(scale, 0, top), ...scaleNotes(scale, top - 1, 0)];
+  const names = onKeyboard([...scaleNotes(scale, 0, top), ...scaleNotes(scale, top - 1, 0)]);
+  if (!names) return [];
   const base = { family: "thumb-pairs", hands: hand, tempo: defaultTempo(passage) };
   const drills: Drill[] = o.fingers.map((k) =>
     buildDrill(passage, {
@@ -90,7 +111,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
     ...base, variant: "five-finger-sideways", title: "Five-finger pattern moving sideways",
     teacherNote: "Moving a fixed hand shape one key at a time trains the lateral move without any thumb passing.",
     studentNote: "Play the five-finger pattern up and back, then move the whole hand one key over; keep the shape of the hand the same.",
-    segments: [{ [hand]: slotsOf([...side, scaleNotes(scale, 0, 0)[0]], [...sideFingers, hand === "right" ? 1 : 5], value) }],
+    segments: [{ [hand]: slotsOf(onKeyboard([...side, scaleNotes(scale, 0, 0)[0]]) ?? [], [...sideFingers, hand === "right" ? 1 : 5], value) }],
   }, ctx));
   // Takeover: fingers 1…k on consecutive notes (right hand up, left hand down), then the thumb retakes finger k's note.
   const k = o.takeover;
@@ -107,7 +128,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
     ...base, variant: `thumb-takes-${k}`, title: `Thumb takes over finger ${k}`,
     teacherNote: "Taking a note over with the thumb moves the hand into the next position without a gap or a bump.",
     studentNote: `Play fingers 1 to ${k} on the scale; the thumb then plays the same key finger ${k} just played, and the hand carries on from there.`,
-    segments: [{ [hand]: slotsOf(cells.map((c) => c.name), cells.map((c) => c.finger), value) }],
+    segments: [{ [hand]: slotsOf(onKeyboard(cells.map((c) => c.name)) ?? [], cells.map((c) => c.finger), value) }],
   }, ctx));
   return drills;
 }
