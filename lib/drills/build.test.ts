@@ -2,6 +2,8 @@ import Fraction from "fraction.js";
 import { describe, expect, test } from "vitest";
 import { barLength, buildDrill, defaultTempo, leadOf, makeContext, restSlot, sonoritySlot, writtenPieces } from "./build";
 import { estimateFingering } from "./fingering";
+import { generateThumbPairs, thumbPairsOptions } from "./families/thumb-pairs";
+import { generateScaleRhythm, scaleRhythmOptions } from "./families/scale-rhythm";
 import { pitchFromName } from "./spell";
 import { makePassage } from "./test-passages";
 import type { Drill } from "./types";
@@ -125,5 +127,31 @@ describe("fingering carried from the passage", () => {
     const own = estimateFingering(p.events, "right").fingers;
     const drillFingers = d.score.events.filter((e) => e.pitch).map((e) => e.fingering?.[0]?.finger);
     expect(drillFingers).toEqual([...own, ...own]);
+  });
+});
+
+describe("fingering sources", () => {
+  test("a fingering the drill prescribes is marked drill; the score's stays score; the rest estimated", () => {
+    const p = makePassage({ right: "C4/8@1 D4/8 E4/8 F4/8 G4/2" });
+    const prescribed = { pitch: pitchFromName("A4"), fingering: [{ finger: 4 }] };
+    const slots = [...p.sonorities.right.map((s) => sonoritySlot(s)), { duration: q(1), notes: [prescribed] }];
+    const d = buildDrill(p, { ...spec, segments: [{ right: slots }] }, makeContext());
+    const notes = d.score.events.filter((e) => e.pitch);
+    expect(notes.map((n) => d.fingeringSource[n.id])).toEqual(["score", "estimated", "estimated", "estimated", "estimated", "drill"]);
+    expect(notes[5].fingering).toEqual([{ finger: 4 }]);
+    expect(notes[5].fingeringSource).toBe("drill");
+  });
+
+  test("thumb-pairs and scale-rhythm fingerings are the drill's own, never the score's", () => {
+    const p = makePassage({ right: "E4/4@3 G4/4 C5/4 G4/4" });
+    for (const d of [
+      ...generateThumbPairs(p, thumbPairsOptions.parse({}), makeContext()).drills,
+      ...generateScaleRhythm(p, scaleRhythmOptions.parse({}), makeContext()).drills,
+    ]) {
+      const sources = d.score.events.filter((e) => e.pitch && e.tie !== "stop" && e.tie !== "continue").map((e) => d.fingeringSource[e.id]);
+      expect(sources, `${d.family}/${d.variant}`).not.toContain("score");
+      if (d.family === "thumb-pairs") expect(new Set(sources), d.variant).toEqual(new Set(["drill"]));
+      else expect(sources, d.variant).toContain("drill");
+    }
   });
 });

@@ -258,7 +258,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
     }
   }
 
-  const fingeringSource: Record<string, "score" | "estimated" | "none"> = {};
+  const fingeringSource: Record<string, "score" | "estimated" | "drill" | "none"> = {};
   for (const e of events) if (e.pitch) fingeringSource[e.id] = e.fingeringSource ?? "none";
 
   const score: Score = {

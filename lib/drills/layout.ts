@@ -10,7 +10,7 @@ import type { Fingering, Hand, NoteEvent, NoteMark, Pitch, TimeSignature, Writte
 export interface SlotNote {
   readonly pitch: Pitch;
   readonly source?: NoteEvent;
-  /** A fingering the generator chose (e.g. standard scale fingering), marked "estimated". */
+  /** A fingering the drill prescribes (e.g. standard scale fingering), marked "drill". */
   readonly fingering?: readonly Fingering[];
 }
 
@@ -183,7 +183,7 @@ function layHand(
           tie,
           ...(n.source ? { source: n.source } : {}),
           ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
-          ...(chosen ? { fingering: chosen, fingeringSource: "estimated" as const } : {}),
+          ...(chosen ? { fingering: chosen, fingeringSource: "drill" as const } : {}),
           ...(first ? extra : {}),
         };
         events.push(e);

@@ -59,8 +59,11 @@ export interface Drill {
   readonly tempo: { readonly start: number; readonly target: number };
   readonly maxSpan: { readonly right?: SpanReport; readonly left?: SpanReport };
   readonly warnings: readonly DrillWarning[];
-  /** Per event id of `score.events`: where its fingering came from. */
-  readonly fingeringSource: Readonly<Record<string, "score" | "estimated" | "none">>;
+  /**
+   * Per event id of `score.events`: where its fingering came from — written in the score, estimated,
+   * prescribed by the drill itself (e.g. a scale's standard fingering), or none.
+   */
+  readonly fingeringSource: Readonly<Record<string, "score" | "estimated" | "drill" | "none">>;
 }
 
 /** Seedable random source in [0, 1). */

@@ -65,7 +65,8 @@ export interface NoteEvent {
   readonly grace?: boolean;
   /** Fingering marks; the first is the one played. */
   readonly fingering?: readonly Fingering[];
-  readonly fingeringSource?: "score" | "estimated";
+  /** Where the fingering came from: the score, an estimate, or a drill that prescribes it. */
+  readonly fingeringSource?: "score" | "estimated" | "drill";
   /** Extra marks a drill may write: fermata, accent, staccato, a diamond (silently pressed) head. */
   readonly marks?: readonly NoteMark[];
   /** Dynamic written at this note (e.g. "f", "p"), for drills that ask one voice to be louder. */

@@ -50,7 +50,7 @@ describe("drills from the demo knots", () => {
       for (const e of notes) {
         expect(e.pitch!.midi, name).toBeGreaterThanOrEqual(21);
         expect(e.pitch!.midi, name).toBeLessThanOrEqual(108);
-        expect(["score", "estimated", "none"]).toContain(drill.fingeringSource[e.id]);
+        expect(["score", "estimated", "drill", "none"]).toContain(drill.fingeringSource[e.id]);
       }
       expect(drill.teacherNote.length, name).toBeGreaterThan(10);
       expect(drill.studentNote.length, name).toBeGreaterThan(10);

@@ -76,15 +76,11 @@ export function restOf(duration: Fraction): Slot {
 }
 
 /**
- * A slot note with a fingering written by the drill itself (a bare source note carries it).
- * @example fingered(pitchFromName("C4"), 1).source?.fingering // [{ finger: 1 }]
+ * A slot note with a fingering prescribed by the drill itself (marked "drill" in the drill).
+ * @example fingered(pitchFromName("C4"), 1).fingering // [{ finger: 1 }]
  */
 export function fingered(pitch: Pitch, finger: number): SlotNote {
-  const source: NoteEvent = {
-    id: "drill", part: "P1", staff: 1, voice: "1", measure: 0, onset: new Fraction(0), duration: new Fraction(0),
-    written: { type: null, dots: 0, tuplet: null }, pitch, chord: false, tie: "none", fingering: [{ finger }],
-  };
-  return { pitch, source };
+  return { pitch, fingering: [{ finger }] };
 }
 
 /**
