@@ -78,7 +78,7 @@ export function PiecesTable({ initial }: { initial: PieceListRow[] }) {
         />
       </label>
       {isError ? <p role="alert" className="text-sm text-madder">The list could not be refreshed.</p> : null}
-      <div className="overflow-x-auto rounded-2xl border border-line bg-card">
+      <div className="relative overflow-x-auto rounded-2xl border border-line bg-card">
         <table className="w-full min-w-[36rem] text-left text-sm" aria-label="Pieces">
           <thead className="border-b border-line bg-paper">
             {table.getHeaderGroups().map((hg) => (

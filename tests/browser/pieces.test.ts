@@ -160,9 +160,16 @@ describe("pieces in the browser", () => {
       await page.getByRole("table", { name: "Pieces" }).waitFor();
       let found = await seriousViolations(page);
       expect(found, describeViolations(found)).toEqual([]);
-      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
-      expect(overflow).toBeLessThanOrEqual(0);
       await shoot(page, `pieces-${width}`);
+      const wide = await page.evaluate(() =>
+        [...document.querySelectorAll("body *")]
+          .filter((el) => el.getBoundingClientRect().right > window.innerWidth + 1 && !el.closest(".overflow-x-auto"))
+          .slice(-3)
+          .map((el) => `${el.tagName.toLowerCase()}.${String(el.className).slice(0, 60)}`),
+      );
+      expect(wide, "elements wider than the phone screen").toEqual([]);
+      const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+      expect(overflow, "the page scrolls sideways").toBeLessThanOrEqual(0);
 
       await page.getByRole("table", { name: "Pieces" }).getByRole("link", { name: "Lantern Waltz" }).click();
       await page.waitForSelector('section[data-status="ready"]', { timeout: 90_000 });
