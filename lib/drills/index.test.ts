@@ -45,3 +45,29 @@ describe("drill registry", () => {
     );
   });
 });
+
+describe("light endings through generateDrills", () => {
+  const p = makePassage({ right: "C4/8 D4/8 E4/8 F4/8 G4/2" });
+  const g4 = (lightEndings: boolean | undefined) =>
+    generateDrills(p, { families: ["tempo-ladder"], lightEndings }).drills.flatMap((d) => d.score.events.filter((e) => e.pitch?.midi === 67));
+
+  test("off by default: the final half note stays long", () => {
+    expect(g4(undefined).length).toBeGreaterThan(0);
+    for (const e of g4(undefined)) expect(e.duration.toFraction()).toBe("2");
+  });
+
+  test("on: each group's long final note becomes an eighth, staccato, and every bar still sums to 4/4 (MusicXML <time>)", () => {
+    const notes = g4(true);
+    expect(notes.length).toBeGreaterThan(0);
+    for (const e of notes) {
+      expect(e.duration.toFraction()).toBe("1/2");
+      expect(e.marks).toContain("staccato");
+    }
+    for (const d of generateDrills(p, { families: ["tempo-ladder", "stops"], lightEndings: true }).drills) {
+      for (const m of d.score.measures) {
+        const sum = d.score.events.filter((e) => e.measure === m.index && !e.chord && !e.grace).reduce((s, e) => s + e.duration.valueOf(), 0);
+        expect(sum, `${d.family}/${d.variant} bar ${m.number}`).toBeCloseTo(4, 9);
+      }
+    }
+  });
+});

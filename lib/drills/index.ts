@@ -6,6 +6,7 @@ import type { Passage } from "../score/types";
 import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
 import { newFingeringMemo } from "./span";
+import { withLightEndings } from "./groups-option";
 import { blocking } from "./families/blocking";
 import { doubles } from "./families/doubles";
 import { heldTone } from "./families/held-tone";
@@ -29,6 +30,7 @@ export { makeContext } from "./build";
 export { estimateFingering } from "./fingering";
 export { DEFAULT_PROFILE, keyDistanceMm, profileFromInches, spanOf } from "./hand";
 export { difficultyMap, hardestBars } from "./difficulty";
+export { applyLightEndings, lightEndingsOption } from "./groups-option";
 
 /**
  * Every drill family by id, in the order a teacher sees them.
@@ -54,6 +56,8 @@ export interface GenerateOptions {
   readonly seed?: number;
   /** Keep generators that move notes inside the profile (default true). */
   readonly safety?: boolean;
+  /** End each group lightly: a long note after shorter ones is cut short and lifted (default false). */
+  readonly lightEndings?: boolean;
 }
 
 export interface GenerateResult {
@@ -76,6 +80,7 @@ function hashId(id: string): number {
  *
  * @example
  * const { drills, skipped } = generateDrills(passage, { families: ["blocking"], seed: 3 });
+ * generateDrills(passage, { families: ["stops"], lightEndings: true }); // groups end short and light
  */
 export function generateDrills(passage: Passage, opts: GenerateOptions = {}): GenerateResult {
   const ids = opts.families ?? Object.keys(families);
@@ -91,7 +96,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     const options = family.options.parse(opts.options?.[id] ?? {});
     const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo });
     const result = family.generate(passage, options, ctx);
-    drills.push(...result.drills);
+    drills.push(...withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }));
     if (result.drills.length === 0) skipped.push({ family: id, reason: result.skipped ?? "No drill of this family fits the passage." });
   }
   return { drills, skipped };
