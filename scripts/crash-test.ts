@@ -175,7 +175,14 @@ export async function crashTest(kills: number, log: (line: string) => void = con
     for (let round = 1; round <= kills; round++) {
       let stopped = false;
       const load = writeLoad(base, ids, cookies, acks, () => stopped, round);
-      await new Promise((r) => setTimeout(r, 150 + Math.random() * 850));
+      // Kill at a random moment once every writer has had a write acknowledged in this round, so
+      // each kill lands among writes in flight whatever the machine's speed.
+      const total = () => [acks.sheets.length, acks.assignmentBatches.length, acks.practice.length];
+      const before = total();
+      const active = [true, Boolean(actionId("assignSheetAction")), Boolean(actionId("logPracticeAction"))];
+      const deadline = Date.now() + 60_000;
+      while (total().some((n, i) => active[i] && n === before[i]) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 20));
+      await new Promise((r) => setTimeout(r, Math.random() * 600));
       stopped = true;
       killHard(server);
       await load;
