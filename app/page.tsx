@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { Wordmark } from "@/components/logo-mark";
+import { KNOT_PATH, Wordmark } from "@/components/logo-mark";
 import { ButtonLink } from "@/components/ui/button";
 import { getStudioContext, homePathFor } from "@/lib/session";
 
@@ -44,7 +44,14 @@ export default async function Landing() {
 
       <main className="flex-1">
         <section className="stave-lines">
-          <div className="mx-auto max-w-6xl px-4 pt-10 pb-24 sm:px-6 sm:pt-16 sm:pb-32">
+          <div className="relative mx-auto max-w-6xl px-4 pt-10 pb-24 sm:px-6 sm:pt-16 sm:pb-32">
+            <svg
+              viewBox="0 0 32 32"
+              aria-hidden
+              className="pointer-events-none absolute right-6 bottom-10 hidden h-72 w-72 text-rosin/60 lg:block"
+            >
+              <path d={KNOT_PATH} fill="none" stroke="currentColor" strokeWidth="0.9" strokeLinecap="round" />
+            </svg>
             <p className="text-sm font-bold uppercase tracking-widest text-rosin">For piano teachers and their students</p>
             <h1 className="mt-3 max-w-3xl text-4xl font-semibold sm:text-6xl">
               Untangle the bars that trip your students up.
