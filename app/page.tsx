@@ -48,7 +48,7 @@ export default async function Landing() {
             <svg
               viewBox="0 0 32 32"
               aria-hidden
-              className="pointer-events-none absolute right-6 bottom-10 hidden h-72 w-72 text-rosin/60 lg:block"
+              className="pointer-events-none absolute right-6 bottom-10 hidden h-72 w-72 text-rosin/60 xl:block"
             >
               <path d={KNOT_PATH} fill="none" stroke="currentColor" strokeWidth="0.9" strokeLinecap="round" />
             </svg>
