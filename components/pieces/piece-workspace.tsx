@@ -100,6 +100,12 @@ export function PieceWorkspace({
           />
         ) : null}
       </aside>
+      {selection ? (
+        <div className="sticky bottom-3 z-10 flex items-center justify-between gap-3 rounded-full border border-line bg-card/95 px-4 py-2 shadow-md xl:hidden">
+          <span className="text-sm"><span className="font-bold">Selected:</span> {describe(selection)}</span>
+          <a href="#mark-knot-title" className="shrink-0 rounded-full bg-walnut px-3 py-1 text-sm font-bold text-paper">Mark knot</a>
+        </div>
+      ) : null}
     </div>
   );
 }
