@@ -153,6 +153,34 @@ describe("pieces in the browser", () => {
     await context.close();
   });
 
+  test("multipart tricks sent straight to the upload handler get 4xx and store nothing", async () => {
+    const { context, page } = await signedIn(1280);
+    const xml = fs.readFileSync(path.join(tmp, "pebble-upload.musicxml"));
+    const cases: { label: string; name: string; mimeType: string; buffer: Buffer; confirm?: string; status: number; message: RegExp }[] = [
+      { label: "path in the name", name: "../../pebble.musicxml", mimeType: "text/xml", buffer: xml, confirm: "yes", status: 400, message: /folder path/ },
+      { label: "wrong content type", name: "pebble.musicxml", mimeType: "text/html", buffer: xml, confirm: "yes", status: 415, message: /text\/html/ },
+      { label: "double extension", name: "pebble.html.xml", mimeType: "text/xml", buffer: xml, confirm: "yes", status: 415, message: /second file type/ },
+      { label: "empty file", name: "pebble.musicxml", mimeType: "text/xml", buffer: Buffer.alloc(0), confirm: "yes", status: 400, message: /empty/ },
+      { label: "over the cap", name: "big.musicxml", mimeType: "text/xml", buffer: Buffer.alloc(5 * 1024 * 1024 + 10, 0x20), confirm: "yes", status: 413, message: /5 MB/ },
+      { label: "no confirmation", name: "pebble.musicxml", mimeType: "text/xml", buffer: xml, status: 400, message: /public domain/ },
+    ];
+    for (const c of cases) {
+      const rows = await scoreRows();
+      const files = storedFiles();
+      const multipart: Record<string, string | { name: string; mimeType: string; buffer: Buffer }> = { file: { name: c.name, mimeType: c.mimeType, buffer: c.buffer } };
+      if (c.confirm) multipart.confirm = c.confirm;
+      const res = await page.request.post("/api/pieces", { multipart });
+      expect(res.status(), c.label).toBe(c.status);
+      expect(((await res.json()) as { error: string }).error, c.label).toMatch(c.message);
+      expect(await scoreRows(), c.label).toBe(rows);
+      expect(storedFiles(), c.label).toBe(files);
+    }
+    const anonymous = await browser.newContext({ baseURL });
+    expect((await anonymous.request.get("/api/pieces")).status()).toBe(401);
+    await anonymous.close();
+    await context.close();
+  });
+
   test("pieces and piece pages pass axe (no serious or critical) and look finished at 390 and 1280 px", async () => {
     for (const width of [1280, 390]) {
       const { context, page } = await signedIn(width);
