@@ -16,7 +16,8 @@ const END = "<!-- bench:end -->";
 function machine(): string {
   const cpus = os.cpus();
   const model = cpus[0]?.model.replace(/\s+/g, " ").trim() ?? "unknown CPU";
-  return `${model}, ${cpus.length} cores, ${Math.round(os.totalmem() / 2 ** 30)} GiB, Node ${process.version}, ${os.platform()} ${os.arch()}`;
+  const load = os.loadavg()[0]!.toFixed(1);
+  return `${model}, ${cpus.length} cores, ${Math.round(os.totalmem() / 2 ** 30)} GiB, Node ${process.version}, ${os.platform()} ${os.arch()} (load average ${load} when the run started)`;
 }
 
 function table(rows: Row[]): string {
@@ -36,6 +37,7 @@ export function writeIntoReadme(readme: string, block: string): string {
 }
 
 async function main(): Promise<void> {
+  const host = machine();
   const dir = path.resolve(__dirname, "bench");
   const onlyArg = process.argv.indexOf("--only");
   const only = onlyArg > 0 ? new Set(process.argv[onlyArg + 1]?.split(",")) : null;
@@ -52,7 +54,7 @@ async function main(): Promise<void> {
     }
   }
   const when = new Date().toISOString().slice(0, 10);
-  const block = `${table(rows)}\n\nMeasured ${when} on ${machine()}. ✓ = goal met, ✗ = missed.`;
+  const block = `${table(rows)}\n\nMeasured ${when} on ${host}. ✓ = goal met, ✗ = missed.`;
   console.log(block);
   if (process.argv.includes("--readme")) {
     const readme = path.resolve(__dirname, "../README.md");

@@ -27,7 +27,7 @@ const arg = (name: string, fallback: number) => {
   return i > 0 ? Number(process.argv[i + 1]) : fallback;
 };
 
-interface Acks {
+export interface Acks {
   sheets: string[];
   assignmentBatches: { note: string; ids: string[] }[];
   practice: string[];
@@ -129,7 +129,8 @@ async function writeLoad(base: string, ids: SeedIds, cookies: { teacher: string;
   await Promise.all([quiet(sheetWriter()), quiet(sheetWriter()), quiet(assignWriter()), quiet(practiceWriter())]);
 }
 
-async function check(dbUrl: string, acks: Acks): Promise<string[]> {
+/** Every broken invariant found in the database (empty when all hold). */
+export async function check(dbUrl: string, acks: Acks): Promise<string[]> {
   const client = createClient({ url: dbUrl });
   const problems: string[] = [];
   try {
