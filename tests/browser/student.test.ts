@@ -119,6 +119,10 @@ describe("from teacher to student", () => {
     await page.getByLabel("Comment").fill("Triplets even at 66.");
     await page.getByLabel("4", { exact: true }).check();
     await page.getByRole("button", { name: "Save practice" }).click();
+    await page.getByText("Practice saved. Well done.").or(page.locator("[role=alert]").first()).first().waitFor();
+    await shoot(page, "student-sheet-after-save");
+    const alerts = await page.getByRole("form", { name: "Log practice" }).locator("[role=alert]").allTextContents();
+    expect(alerts.filter((a) => a.trim())).toEqual([]);
     await page.getByText("Practice saved. Well done.").waitFor();
     await page.getByTestId("history").getByText("20 min · ease 4/5").waitFor();
 
@@ -149,7 +153,9 @@ describe("from teacher to student", () => {
     const row = page.getByTestId("progress-table").getByRole("row").filter({ hasText: "Triplets even at 66." });
     await row.waitFor();
     await expect(row.textContent()).resolves.toMatch(/20.*♩ 66/);
-    await page.getByTestId("tempo-chart").locator(".recharts-line").first().waitFor();
+    // one entry is one point: the line is a single dot, drawn but with no visible length
+    await page.getByTestId("tempo-chart").locator(".recharts-line").first().waitFor({ state: "attached" });
+    expect(await page.getByTestId("tempo-chart").locator(".recharts-line-dots circle, .recharts-dot").count()).toBeGreaterThan(0);
     await shoot(page, "progress-1280");
   });
 });

@@ -27,6 +27,8 @@ export function PracticeForm({ assignmentId, drills, today }: { assignmentId: st
     defaultValues: { assignmentId, practisedOn: today, minutes: 15, ease: 3, comment: "", tempos: {} },
   });
   const { errors, isSubmitting } = form.formState;
+  // radios keep a number in the form state (register's setValueAs applies to text inputs only)
+  const ease = form.watch("ease");
   const err = (field: "practisedOn" | "minutes" | "ease" | "comment"): string | string[] | undefined =>
     (errors[field]?.message as string | undefined) ?? serverErrors[field];
 
@@ -50,7 +52,7 @@ export function PracticeForm({ assignmentId, drills, today }: { assignmentId: st
   return (
     <form onSubmit={form.handleSubmit(onSubmit)} className="flex flex-col gap-4" noValidate aria-label="Log practice">
       <FormMessage message={message} />
-      {saved ? <p role="status" className="rounded-xl bg-sage-soft px-3.5 py-2.5 text-sm text-sage">Practice saved. Well done.</p> : null}
+      {saved ? <p role="status" className="rounded-xl bg-sage-soft px-3.5 py-2.5 text-sm text-ink">Practice saved. Well done.</p> : null}
       <div className="grid grid-cols-2 gap-3">
         <label className="flex flex-col gap-1 text-sm font-bold text-walnut">
           Date
@@ -78,7 +80,7 @@ export function PracticeForm({ assignmentId, drills, today }: { assignmentId: st
         <div className="mt-1 flex gap-2">
           {[1, 2, 3, 4, 5].map((n) => (
             <label key={n} className="flex items-center gap-1 rounded-full border border-line bg-card px-3 py-1.5 text-sm">
-              <input type="radio" value={n} {...form.register("ease", { setValueAs: numberOrUndefined })} /> {n}
+              <input type="radio" name="ease" value={n} checked={ease === n} onChange={() => form.setValue("ease", n, { shouldValidate: true })} /> {n}
             </label>
           ))}
         </div>
