@@ -14,5 +14,14 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: ["/home/:path*", "/pieces/:path*", "/knots/:path*", "/sheets/:path*", "/students/:path*", "/my/:path*"],
+  matcher: [
+    "/home/:path*",
+    "/pieces/:path*",
+    "/knots/:path*",
+    "/sheets/:path*",
+    "/students/:path*",
+    "/assignments/:path*",
+    "/progress/:path*",
+    "/my/:path*",
+  ],
 };
