@@ -42,7 +42,7 @@ export function FamilySwitches({
                   </span>
                 </label>
                 {on && (
-                  <div className="mt-3 border-t border-line pt-3">
+                  <div className="@container mt-3 border-t border-line pt-3">
                     <OptionsForm family={f} value={options[f.id] ?? {}} onChange={(next) => onOptions(f.id, next)} />
                   </div>
                 )}

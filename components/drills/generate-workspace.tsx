@@ -88,33 +88,36 @@ export function GenerateWorkspace({
 
   const error = query.error instanceof RequestProblem ? query.error : query.error ? new RequestProblem(String(query.error.message), []) : null;
   return (
-    <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
-      <aside aria-label="Drill families" className="flex flex-col gap-4">
-        <div className="flex flex-col gap-1">
-          <label htmlFor="hand-profile" className="text-sm font-bold text-walnut">Measure spans for</label>
-          <select id="hand-profile" value={profile} onChange={(e) => setProfile(e.target.value)}
-            className="rounded-xl border border-line bg-card px-3 py-2 text-sm focus:border-walnut focus:outline-none">
-            <option value="">Default hand ({defaultSpanMm} mm)</option>
-            {hands.map((h) => <option key={h.membershipId} value={h.membershipId}>{h.name} ({h.spanMm} mm)</option>)}
-          </select>
+    <div className="grid gap-6 lg:grid-cols-[16rem_minmax(0,1fr)_18rem] lg:items-start lg:gap-5">
+      {/* On wide screens the families scroll inside their own panel, so the Generate button below them covers nothing. */}
+      <aside aria-label="Drill families" className="flex flex-col gap-3 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
+        <div className="flex flex-col gap-4 lg:min-h-0 lg:overflow-y-auto lg:pr-1" data-testid="family-panel">
+          <div className="flex flex-col gap-1">
+            <label htmlFor="hand-profile" className="text-sm font-bold text-walnut">Measure spans for</label>
+            <select id="hand-profile" value={profile} onChange={(e) => setProfile(e.target.value)}
+              className="rounded-xl border border-line bg-card px-3 py-2 text-sm focus:border-walnut focus:outline-none">
+              <option value="">Default hand ({defaultSpanMm} mm)</option>
+              {hands.map((h) => <option key={h.membershipId} value={h.membershipId}>{h.name} ({h.spanMm} mm)</option>)}
+            </select>
+          </div>
+          <FamilySwitches
+            families={families}
+            suggested={suggested}
+            enabled={enabled}
+            options={options}
+            onToggle={(id, on) => setEnabled((old) => (on ? [...old, id] : old.filter((x) => x !== id)))}
+            onOptions={(id, next) => setOptions((old) => ({ ...old, [id]: next }))}
+          />
         </div>
-        <FamilySwitches
-          families={families}
-          suggested={suggested}
-          enabled={enabled}
-          options={options}
-          onToggle={(id, on) => setEnabled((old) => (on ? [...old, id] : old.filter((x) => x !== id)))}
-          onOptions={(id, next) => setOptions((old) => ({ ...old, [id]: next }))}
-        />
         <button type="button" disabled={draft.families.length === 0}
           onClick={() => { setLive(true); setRequest(draft); }}
-          className="sticky bottom-3 rounded-full bg-walnut px-5 py-3 font-bold text-paper shadow-md hover:bg-walnut-soft disabled:opacity-60">
+          className="shrink-0 rounded-full bg-walnut px-5 py-3 font-bold text-paper shadow-md hover:bg-walnut-soft disabled:opacity-60">
           {query.isFetching ? "Generating…" : "Generate"}
         </button>
       </aside>
       <div className="flex min-w-0 flex-col gap-5">
         <div aria-live="polite" className="flex flex-col gap-2">
-          {!request && <p className="rounded-xl border border-dashed border-line p-6 text-center text-muted">Choose drill families on the left, then press Generate.</p>}
+          {!request && <p className="rounded-xl border border-dashed border-line p-6 text-center text-muted">Switch on the drill families you want, then press Generate.</p>}
           {error && (
             <div role="alert" className="rounded-xl border border-madder/40 bg-madder-soft p-3 text-sm text-madder">
               <p className="font-bold">{error.message}</p>
@@ -124,7 +127,7 @@ export function GenerateWorkspace({
           {query.data && (
             <p className="text-sm text-muted" data-testid="generate-summary">
               {query.data.drills.length} drills{query.isFetching ? " — updating…" : ""}
-              {picks.length > 0 && <> · <a href="#sheet-builder" className="font-bold text-walnut underline">{picks.length} picked</a></>}
+              {picks.length > 0 && <span className="lg:hidden"> · <a href="#sheet-builder" className="font-bold text-walnut underline">{picks.length} picked</a></span>}
             </p>
           )}
           {query.data && query.data.skipped.length > 0 && (
@@ -136,15 +139,15 @@ export function GenerateWorkspace({
           )}
         </div>
         {drills && (
-          <section aria-label="Drill previews" className="grid gap-4 xl:grid-cols-2">
+          <section aria-label="Drill previews" className="grid gap-4">
             {drills.map((d) => (
               <DrillCard key={d.key} drill={d} familyLabel={labelOf(d.family)} picked={picks.some((p) => p.key === d.key)}
                 onPick={(on) => pick(d.key, on)} downloadHref={href(d.key)} />
             ))}
           </section>
         )}
-        <SheetBuilder items={picks} onItems={setPicks} onSave={save} saving={saving} problems={saveProblems} />
       </div>
+      <SheetBuilder items={picks} onItems={setPicks} onSave={save} saving={saving} problems={saveProblems} />
     </div>
   );
 }

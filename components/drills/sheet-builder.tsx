@@ -31,16 +31,17 @@ export function SheetBuilder({
     if (from >= 0 && to >= 0) move(from, to);
   }
   return (
-    <section id="sheet-builder" aria-labelledby="sheet-builder-title" className="flex flex-col gap-3 rounded-[var(--radius-card)] border border-walnut/25 bg-rosin-soft/25 p-4">
+    <section id="sheet-builder" aria-labelledby="sheet-builder-title" className="@container flex scroll-mt-4 flex-col gap-3 rounded-[var(--radius-card)] border border-walnut/25 bg-rosin-soft/25 p-4 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)]">
       <h2 id="sheet-builder-title" className="text-xl font-semibold">
         Drill sheet <span className="font-mono text-sm text-muted">({items.length} picked)</span>
       </h2>
       {items.length === 0 ? (
-        <p className="text-sm text-muted">Pick drills above; they line up here in the order the student plays them.</p>
+        <p className="text-sm text-muted">Pick drills from the previews; they line up here in the order the student plays them.</p>
       ) : (
         <DndContext sensors={sensors} collisionDetection={closestCenter} onDragEnd={dragEnd}>
           <SortableContext items={items.map((i) => i.key)} strategy={verticalListSortingStrategy}>
-            <ol className="flex flex-col gap-2" aria-label="Drills on the sheet, in order">
+            {/* On wide screens the list scrolls inside the panel, so the name and Save stay in view. */}
+            <ol className="flex flex-col gap-2 lg:-mx-1 lg:min-h-0 lg:overflow-y-auto lg:px-1 lg:py-0.5" aria-label="Drills on the sheet, in order">
               {items.map((item, i) => (
                 <SheetItem
                   key={item.key}
@@ -57,7 +58,7 @@ export function SheetBuilder({
         </DndContext>
       )}
       <form
-        className="flex flex-col gap-2 sm:flex-row sm:items-end"
+        className="flex shrink-0 flex-col gap-2 @md:flex-row @md:items-end"
         onSubmit={(e) => {
           e.preventDefault();
           onSave(title);

@@ -25,7 +25,8 @@ export default async function KnotGeneratePage({ params }: { params: Promise<{ k
     id: f.id,
     label: f.label,
     describe: f.describe,
-    schema: z.toJSONSchema(f.options, { io: "input", unrepresentable: "any" }) as JsonSchema,
+    // A JSON round trip leaves plain objects only, as props of a client component must be.
+    schema: JSON.parse(JSON.stringify(z.toJSONSchema(f.options, { io: "input", unrepresentable: "any" }))) as JsonSchema,
   }));
   const suggested = suggestFamilies(knot.tags as ProblemTag[]).filter((id) => families[id]);
   let excerpt: string | null = null;
