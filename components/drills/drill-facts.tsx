@@ -1,4 +1,5 @@
 import type { SheetDrillMeta } from "@/db/schema";
+import { spanParts } from "./span-label";
 
 type Span = { semitones: number; mm: number; overComfortable?: boolean };
 
@@ -14,10 +15,7 @@ export function DrillFacts({
   estimatedFingering: boolean;
   warnings: string[];
 }) {
-  const spans = (["right", "left"] as const).flatMap((h) => {
-    const s = maxSpan?.[h] as Span | undefined;
-    return s ? [`${h === "right" ? "RH" : "LH"} ${s.semitones} st · ${Math.round(s.mm)} mm`] : [];
-  });
+  const spans = spanParts(maxSpan);
   return (
     <div className="flex flex-col gap-1.5">
       <div className="flex flex-wrap gap-1.5 text-xs font-bold">
