@@ -47,3 +47,14 @@ export async function getHandProfile(database: Db, studioId: string, membershipI
     .limit(1);
   return row ?? null;
 }
+
+/** A knot's piece and bars, for links back from a drill sheet; null when the knot is gone or elsewhere. */
+export async function getKnotHeading(database: Db, studioId: string, knotId: string) {
+  const [row] = await database
+    .select({ id: passage.id, scoreId: passage.scoreId, scoreTitle: score.title, fromBar: passage.fromBar, toBar: passage.toBar })
+    .from(passage)
+    .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .where(inStudio(passage, studioId, eq(passage.id, knotId)))
+    .limit(1);
+  return row ?? null;
+}

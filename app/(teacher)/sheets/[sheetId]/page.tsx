@@ -7,6 +7,7 @@ import { DrillEngraving } from "@/components/drills/drill-engraving";
 import { DrillFacts } from "@/components/drills/drill-facts";
 import { DrillPlayer } from "@/components/drills/drill-player";
 import { db } from "@/db";
+import { getKnotHeading } from "@/db/queries/knot-drills";
 import { getSheet } from "@/db/queries/sheets";
 import { playbackOf } from "@/lib/drill-dto";
 import { readScore } from "@/lib/score";
@@ -20,15 +21,28 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
   const { sheetId } = await params;
   const sheet = await getSheet(db, ctx.studioId, sheetId);
   if (!sheet) notFound();
+  const knot = sheet.passageId ? await getKnotHeading(db, ctx.studioId, sheet.passageId) : null;
+  const bars = knot ? (knot.fromBar === knot.toBar ? `bar ${knot.fromBar}` : `bars ${knot.fromBar}–${knot.toBar}`) : "";
   return (
     <div className="flex flex-col gap-6">
       <header className="flex flex-col gap-3 sm:flex-row sm:items-end sm:justify-between">
-        <div>
-          <p className="text-sm font-bold uppercase tracking-widest text-walnut-soft">Drill sheet</p>
+        <div className="flex flex-col gap-1">
+          <nav aria-label="Breadcrumb" className="text-sm">
+            <ol className="flex flex-wrap items-center gap-x-1.5 gap-y-0.5 text-muted">
+              <li><Link href="/sheets" className="underline hover:text-walnut">Drill sheets</Link></li>
+              {knot && (
+                <>
+                  <li aria-hidden="true">/</li>
+                  <li><Link href={`/pieces/${knot.scoreId}`} className="font-bold text-walnut underline" data-testid="sheet-piece-link">{knot.scoreTitle}</Link></li>
+                  <li aria-hidden="true">/</li>
+                  <li><Link href={`/knots/${knot.id}`} className="font-bold text-walnut underline" data-testid="sheet-knot-link">Knot, {bars}</Link></li>
+                </>
+              )}
+            </ol>
+          </nav>
           <h1 className="text-3xl font-semibold sm:text-4xl">{sheet.title}</h1>
           <p className="font-mono text-sm text-muted">
-            {sheet.drills.length} drills
-            {sheet.passageId && <> · <Link href={`/knots/${sheet.passageId}`} className="underline">back to the knot</Link></>}
+            {sheet.drills.length} drills{knot ? ` from ${knot.scoreTitle}, ${bars}` : ""}
           </p>
         </div>
         <a href={`/api/sheets/${sheet.id}/zip`} download className="inline-flex items-center justify-center rounded-full bg-walnut px-5 py-2.5 text-sm font-bold text-paper hover:bg-walnut-soft">
