@@ -31,15 +31,23 @@ afterAll(async () => {
   fs.rmSync(tmp, { recursive: true, force: true });
 });
 
+let session: Awaited<ReturnType<import("playwright-core").BrowserContext["storageState"]>> | null = null;
+
+/** A context signed in as the demo teacher; the sign-in form is used once and its cookies reused. */
 async function signedIn(width: number) {
-  const context = await browser.newContext({ viewport: { width, height: 900 }, baseURL });
-  const page = await context.newPage();
-  await page.goto("/sign-in");
-  await page.getByLabel("E-mail").fill("teacher@knotwork.test");
-  await page.getByLabel("Password").fill("practise-slowly");
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL("**/home");
-  return { context, page };
+  if (!session) {
+    const first = await browser.newContext({ baseURL });
+    const page = await first.newPage();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail").fill("teacher@knotwork.test");
+    await page.getByLabel("Password").fill("practise-slowly");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL("**/home");
+    session = await first.storageState();
+    await first.close();
+  }
+  const context = await browser.newContext({ viewport: { width, height: 900 }, baseURL, storageState: session });
+  return { context, page: await context.newPage() };
 }
 
 const scoreRows = async () => Number((await dbClient.execute("select count(*) as n from score")).rows[0]!.n);
