@@ -8,7 +8,7 @@ import type { Clef, Hand, Measure, NoteEvent, Passage, Score, Sonority, TimeSign
 import type { Drill, DrillContext, DrillWarning, HandProfile, SpanReport } from "./types";
 import { barLength, laySegments, type LaidEvent, type Segment, type Slot, type SlotNote } from "./layout";
 import { mulberry32 } from "./rng";
-import { addEstimatedFingering, measureSpan, newFingeringMemo, PROFILE, type FingeringMemo } from "./span";
+import { estimatedFingers, measureSpan, newFingeringMemo, PROFILE, type FingeringMemo } from "./span";
 
 export { barLength, writtenPieces, laySegments } from "./layout";
 export type { Segment, Slot, SlotNote } from "./layout";
@@ -181,8 +181,8 @@ function divisionsOf(events: readonly LaidEvent[]): number {
   return divisions;
 }
 
-/** A laid event as a score event on its staff (one voice per staff). */
-function toEvent(l: LaidEvent, id: string, staff: number): NoteEvent {
+/** A laid event as a score event on its staff (one voice per staff), with its estimated finger if any. */
+function toEvent(l: LaidEvent, id: string, staff: number, estimated: number | null): NoteEvent {
   const e: { -readonly [K in keyof NoteEvent]: NoteEvent[K] } = {
     measure: l.measure, onset: l.onset, duration: l.duration, written: l.written, pitch: l.pitch, chord: l.chord, tie: l.tie,
     id, part: "P1", staff, voice: String(staff),
@@ -190,6 +190,10 @@ function toEvent(l: LaidEvent, id: string, staff: number): NoteEvent {
   if (l.grace !== undefined) e.grace = l.grace;
   if (l.fingering !== undefined) e.fingering = l.fingering;
   if (l.fingeringSource !== undefined) e.fingeringSource = l.fingeringSource;
+  if (estimated !== null) {
+    e.fingering = [{ finger: estimated }];
+    e.fingeringSource = "estimated";
+  }
   if (l.marks !== undefined) e.marks = l.marks;
   if (l.dynamic !== undefined) e.dynamic = l.dynamic;
   if (l.words !== undefined) e.words = l.words;
@@ -235,10 +239,12 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
     (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || pitchKey[a]! - pitchKey[b]!,
   );
   const ordered = order.map((i) => laid[i]!);
-  const sources = ordered.map((e) => e.source);
-  let events: NoteEvent[] = ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand)));
   const memo = ctx.fingeringMemo ?? newFingeringMemo();
-  events = addEstimatedFingering(events, (staff) => hands.find((h) => staffOf(h) === staff) ?? "right", { passage, sources, memo });
+  // Laid events carry every field the fingering estimate reads (pitch, onset, tie, measure, fingering).
+  const fingers = estimatedFingers(ordered as unknown as NoteEvent[], (i) => ordered[i]!.hand, {
+    passage, sources: ordered.map((e) => e.source), memo,
+  });
+  const events: NoteEvent[] = ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand), fingers[i] ?? null));
 
   const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
   const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));

@@ -134,18 +134,68 @@ export function impliedTuplet(duration: Fraction): { actual: number; normal: num
   return { actual: odd, normal };
 }
 
-/** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
-function layHand(
-  hand: Hand,
-  slots: readonly Slot[],
-  start: Fraction,
-  bar: Fraction,
-): { events: LaidEvent[]; end: Fraction } {
-  const events: LaidEvent[] = [];
+/** One written piece of a slot: where it starts, its bar and its written value. */
+interface Piece { onset: Fraction; duration: Fraction; written: Written; measure: number }
+
+function gcd(x: number, y: number): number {
+  while (y !== 0) [x, y] = [y, x % y];
+  return x;
+}
+
+/** `f` in ticks of 1/`unit` quarter note, or NaN when it is not a whole number of ticks. */
+function ticksOf(f: Fraction, unit: number): number {
+  const t = (Number(f.s * f.n) * unit) / Number(f.d);
+  return Number.isSafeInteger(t) ? t : NaN;
+}
+
+/**
+ * The written pieces of every slot, counted in integer ticks (a common denominator of all
+ * lengths) so that only each piece's onset becomes a Fraction. Null when a length does not fit
+ * the ticks; the caller then lays the slots with Fractions throughout.
+ */
+function piecesByTicks(slots: readonly Slot[], start: Fraction, bar: Fraction): { pieces: Piece[][]; end: Fraction } | null {
+  let unit = Number(bar.d) * Number(start.d) / gcd(Number(bar.d), Number(start.d));
+  for (const slot of slots) {
+    const d = Number(slot.duration.d);
+    unit = (unit / gcd(unit, d)) * d;
+  }
+  if (!Number.isSafeInteger(unit) || unit > 1 << 20) return null;
+  const barT = ticksOf(bar, unit);
+  const onsets = new Map<number, Fraction>();
+  const at = (t: number) => {
+    let f = onsets.get(t);
+    if (!f) onsets.set(t, (f = new Fraction(t, unit)));
+    return f;
+  };
+  let t = ticksOf(start, unit);
+  const out: Piece[][] = [];
+  for (const slot of slots) {
+    const slotEnd = t + ticksOf(slot.duration, unit);
+    const pieces: Piece[] = [];
+    let cursor = t;
+    while (cursor < slotEnd) {
+      const measure = Math.floor(cursor / barT);
+      const chunkEnd = Math.min((measure + 1) * barT, slotEnd);
+      for (const p of writtenPieces(new Fraction(chunkEnd - cursor, unit), slot.tuplet)) {
+        const length = ticksOf(p.duration, unit);
+        if (Number.isNaN(length)) return null;
+        pieces.push({ onset: at(cursor), duration: p.duration, written: p.written, measure });
+        cursor += length;
+      }
+    }
+    out.push(pieces);
+    t = slotEnd;
+  }
+  return { pieces: out, end: at(t) };
+}
+
+/** The same pieces with Fractions throughout (any length). */
+function piecesExact(slots: readonly Slot[], start: Fraction, bar: Fraction): { pieces: Piece[][]; end: Fraction } {
   let t = start;
+  const out: Piece[][] = [];
   for (const slot of slots) {
     const slotEnd = t.add(slot.duration);
-    const pieces: { onset: Fraction; duration: Fraction; written: Written; measure: number }[] = [];
+    const pieces: Piece[] = [];
     let cursor = t;
     while (cursor.compare(slotEnd) < 0) {
       const measure = cursor.div(bar).floor().valueOf();
@@ -156,6 +206,23 @@ function layHand(
         cursor = cursor.add(p.duration);
       }
     }
+    out.push(pieces);
+    t = slotEnd;
+  }
+  return { pieces: out, end: t };
+}
+
+/** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
+function layHand(
+  hand: Hand,
+  slots: readonly Slot[],
+  start: Fraction,
+  bar: Fraction,
+): { events: LaidEvent[]; end: Fraction } {
+  const { pieces: all, end } = piecesByTicks(slots, start, bar) ?? piecesExact(slots, start, bar);
+  const events: LaidEvent[] = [];
+  slots.forEach((slot, s) => {
+    const pieces = all[s]!;
     const sorted = slot.notes.length > 1 ? [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi) : slot.notes;
     const extra: { marks?: readonly NoteMark[]; words?: string; dynamic?: string } = {};
     if (slot.marks !== undefined) extra.marks = slot.marks;
@@ -189,9 +256,8 @@ function layHand(
         events.push(e);
       });
     });
-    t = slotEnd;
-  }
-  return { events, end: t };
+  });
+  return { events, end };
 }
 
 /** Rests from `from` to `to`, split at barlines. */

@@ -18,23 +18,28 @@ export const PROFILE: HandProfile = DEFAULT_PROFILE;
  * measureSpan(drill.score.events.filter((e) => e.staff === 1), PROFILE)?.semitones;
  */
 export function measureSpan(events: readonly NoteEvent[], profile: HandProfile): SpanReport | null {
-  // Onsets keyed as numbers: different onsets with small denominators never share a double.
+  // Notes struck together, by onset (onsets as numbers: different onsets with small denominators
+  // never share a double). A single note spans nothing, so only chords are measured.
   const byOnset = new Map<number, NoteEvent[]>();
+  let notes = 0;
   for (const e of events) {
     if (!e.pitch || e.grace) continue;
+    notes++;
     const k = e.onset.valueOf();
     const chord = byOnset.get(k);
     if (chord) chord.push(e); else byOnset.set(k, [e]);
   }
+  if (notes === 0) return null;
   let worst: SpanReport | null = null;
   for (const chord of byOnset.values()) {
+    if (chord.length < 2) continue;
     const fingers = chord.map((e) => e.fingering?.[0]?.finger ?? null);
     const report = spanOf(chord, fingers.every((f) => f !== null) ? fingers : null, profile);
     if (!worst || report.mm > worst.mm || (report.mm === worst.mm && report.overComfortable && !worst.overComfortable)) {
       worst = report;
     }
   }
-  return worst;
+  return worst ?? spanOf([events.find((e) => e.pitch && !e.grace)!], null, profile);
 }
 
 /**
@@ -105,48 +110,61 @@ function sequenceKey(hand: Hand, events: readonly NoteEvent[], hints: readonly (
 }
 
 /**
- * Add estimated fingering (marked "estimated", from `estimateFingering`) to unfingered notes, per
- * staff; the score's own fingerings stay as they are and steer the estimate. Tied continuations
- * get no finger. With `carry`, a note that plays a passage note (same key, or octaves apart) is
- * steered towards the finger the passage's own estimate gives it, so a drill is fingered as the
- * piece is, and only new notes are searched freely; estimates are shared through the memo.
+ * The estimated finger for each unfingered note (null where the note keeps its written finger, is
+ * a rest or a tied continuation), estimating each hand's notes together. `handOf(i)` is event i's
+ * hand. With `carry`, a note that plays a passage note (same key, or octaves apart) is steered
+ * towards the finger the passage's own estimate gives it, so a drill is fingered as the piece is,
+ * and only new notes are searched freely; estimates are shared through the memo.
  *
  * @example
- * addEstimatedFingering(events, () => "right");
+ * estimatedFingers(events, () => "right"); // [null, 2, 3, …] when the first note is fingered
  */
-export function addEstimatedFingering(events: NoteEvent[], handOfStaff: (staff: number) => Hand, carry?: FingeringCarry): NoteEvent[] {
-  const out = [...events];
-  const byStaff = new Map<number, number[]>();
-  events.forEach((e, i) => {
-    const list = byStaff.get(e.staff);
-    if (list) list.push(i); else byStaff.set(e.staff, [i]);
+export function estimatedFingers(events: readonly NoteEvent[], handOf: (i: number) => Hand, carry?: FingeringCarry): (number | null)[] {
+  const out: (number | null)[] = new Array<number | null>(events.length).fill(null);
+  const byHand = new Map<Hand, number[]>();
+  events.forEach((_, i) => {
+    const h = handOf(i);
+    const list = byHand.get(h);
+    if (list) list.push(i); else byHand.set(h, [i]);
   });
-  for (const [staff, idx] of byStaff) {
-    const hand = handOfStaff(staff);
-    const staffEvents = idx.map((i) => events[i]!);
+  for (const [hand, idx] of byHand) {
+    const handEvents = idx.map((i) => events[i]!);
     let hints: (number | null)[] | undefined;
     if (carry) {
       const fromPassage = passageFingers(carry.passage, hand, carry.memo);
+      const staff = carry.passage.staffOf[hand];
       hints = idx.map((i) => {
         const src = carry.sources[i];
         const e = events[i]!;
-        if (!src?.pitch || !e.pitch || src.staff !== carry.passage.staffOf[hand]) return null;
-        if ((e.pitch.midi - src.pitch.midi) % 12 !== 0) return null;
+        if (!src?.pitch || !e.pitch || src.staff !== staff || (e.pitch.midi - src.pitch.midi) % 12 !== 0) return null;
         return fromPassage.get(src.id) ?? null;
       });
     }
-    const key = carry ? sequenceKey(hand, staffEvents, hints) : "";
+    const key = carry ? sequenceKey(hand, handEvents, hints) : "";
     let fingers = carry ? carry.memo.sequences.get(key) : undefined;
     if (!fingers) {
-      fingers = estimateFingering(staffEvents, hand, { hints, costs: false }).fingers;
+      fingers = estimateFingering(handEvents, hand, { hints, costs: false }).fingers;
       if (carry) carry.memo.sequences.set(key, fingers);
     }
     idx.forEach((i, k) => {
       const e = events[i]!;
       const f = fingers[k];
       if (!e.pitch || e.fingering?.length || f == null || e.tie === "stop" || e.tie === "continue") return;
-      out[i] = { ...e, fingering: [{ finger: f }], fingeringSource: "estimated" };
+      out[i] = f;
     });
   }
   return out;
+}
+
+/**
+ * Add estimated fingering (marked "estimated", from `estimateFingering`) to unfingered notes, per
+ * staff; the score's own fingerings stay as they are and steer the estimate. Tied continuations
+ * get no finger. `carry` as for `estimatedFingers`.
+ *
+ * @example
+ * addEstimatedFingering(events, () => "right");
+ */
+export function addEstimatedFingering(events: NoteEvent[], handOfStaff: (staff: number) => Hand, carry?: FingeringCarry): NoteEvent[] {
+  const fingers = estimatedFingers(events, (i) => handOfStaff(events[i]!.staff), carry);
+  return events.map((e, i) => (fingers[i] == null ? e : { ...e, fingering: [{ finger: fingers[i]! }], fingeringSource: "estimated" }));
 }
