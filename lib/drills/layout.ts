@@ -5,6 +5,9 @@
  */
 import Fraction from "fraction.js";
 import type { Fingering, Hand, NoteEvent, NoteMark, Pitch, TimeSignature, Written } from "../score/types";
+import { writtenPieces } from "./written-pieces";
+
+export { impliedTuplet, writtenPieces } from "./written-pieces";
 
 /** One note of a drill slot; `source` is the passage note it comes from (its fingering is kept). */
 export interface SlotNote {
@@ -42,26 +45,6 @@ export interface LaidEvent extends Omit<NoteEvent, "id" | "part" | "staff" | "vo
   readonly source?: NoteEvent;
 }
 
-const BASES: readonly [string, Fraction][] = [
-  ["whole", new Fraction(4)],
-  ["half", new Fraction(2)],
-  ["quarter", new Fraction(1)],
-  ["eighth", new Fraction(1, 2)],
-  ["16th", new Fraction(1, 4)],
-  ["32nd", new Fraction(1, 8)],
-  ["64th", new Fraction(1, 16)],
-  ["128th", new Fraction(1, 32)],
-];
-
-/** Every written value (type with 0–2 dots), longest first. */
-const VALUES: readonly { type: string; dots: number; value: Fraction }[] = BASES.flatMap(
-  ([type, v]) => [
-    { type, dots: 2, value: v.mul(7, 4) },
-    { type, dots: 1, value: v.mul(3, 2) },
-    { type, dots: 0, value: v },
-  ],
-).sort((a, b) => b.value.compare(a.value));
-
 /**
  * Bar length in quarter notes.
  *
@@ -70,68 +53,6 @@ const VALUES: readonly { type: string; dots: number; value: Fraction }[] = BASES
  */
 export function barLength(time: TimeSignature): Fraction {
   return new Fraction(time.beats * 4, time.beatType);
-}
-
-/**
- * Split a sounding duration into written pieces (longest first), keeping a tuplet ratio.
- * Throws when a piece would be shorter than a 128th.
- *
- * @example
- * writtenPieces(new Fraction(5, 4)).map((p) => p.written.type); // ["quarter", "16th"]
- * writtenPieces(new Fraction(1, 3), { actual: 3, normal: 2 })[0].written.type; // "eighth"
- */
-export function writtenPieces(
-  duration: Fraction,
-  tuplet?: { actual: number; normal: number },
-): { duration: Fraction; written: Written }[] {
-  const key = `${duration.s < 0 ? "-" : ""}${duration.n}/${duration.d}:${tuplet ? `${tuplet.actual}/${tuplet.normal}` : ""}`;
-  let found = PIECES.get(key);
-  if (!found) {
-    found = computePieces(duration, tuplet);
-    if (PIECES.size > 4096) PIECES.clear();
-    PIECES.set(key, found);
-  }
-  return found.map((p) => ({ duration: p.duration, written: { ...p.written, tuplet: p.written.tuplet ? { ...p.written.tuplet } : null } }));
-}
-
-/** Written pieces by duration and tuplet: a pure function of a few hundred inputs, so kept. */
-const PIECES = new Map<string, readonly { duration: Fraction; written: Written }[]>();
-
-function computePieces(
-  duration: Fraction,
-  tuplet?: { actual: number; normal: number },
-): { duration: Fraction; written: Written }[] {
-  if (!tuplet || impliedTuplet(duration.mul(tuplet.actual, tuplet.normal))) tuplet = impliedTuplet(duration);
-  const factor = tuplet ? new Fraction(tuplet.actual, tuplet.normal) : new Fraction(1);
-  let rest = duration.mul(factor);
-  const out: { duration: Fraction; written: Written }[] = [];
-  while (rest.compare(0) > 0) {
-    const v = VALUES.find((c) => c.value.compare(rest) <= 0);
-    if (!v) throw new RangeError(`duration ${duration.toFraction()} cannot be written`);
-    out.push({
-      duration: v.value.div(factor),
-      written: { type: v.type, dots: v.dots, tuplet: tuplet ? { ...tuplet } : null },
-    });
-    rest = rest.sub(v.value);
-  }
-  return out;
-}
-
-/**
- * The tuplet a duration needs when it is not a plain note value (its denominator is not a power
- * of two): the odd part of the denominator in the time of the next lower power of two (3:2, 5:4 …).
- *
- * @example
- * impliedTuplet(new Fraction(1, 3)); // { actual: 3, normal: 2 }
- * impliedTuplet(new Fraction(3, 4)); // undefined
- */
-export function impliedTuplet(duration: Fraction): { actual: number; normal: number } | undefined {
-  let odd = Number(duration.d);
-  while (odd % 2 === 0) odd /= 2;
-  if (odd === 1) return undefined;
-  let normal = 1;
-  while (normal * 2 < odd) normal *= 2;
-  return { actual: odd, normal };
 }
 
 /** One written piece of a slot: where it starts, its bar and its written value. */
