@@ -128,7 +128,8 @@ export default async function Landing() {
       </main>
 
       <footer className="border-t border-line px-4 py-6 text-center text-xs text-muted">
-        Knotwork · <Link href="/sign-in" className="underline">Sign in</Link> · Text set in Atkinson Hyperlegible Next,
+        Knotwork · <Link href="/sign-in" className="underline">Sign in</Link> ·{" "}
+        <Link href="/about" className="underline">About and credits</Link> · Text set in Atkinson Hyperlegible Next,
         figures in IBM Plex Mono, headings in Fraunces (SIL Open Font License).
       </footer>
     </div>

@@ -35,6 +35,7 @@ export function AppShell({ ctx, children }: { ctx: StudioContext; children: Reac
       </main>
       <footer className="border-t border-line px-4 py-5 text-center text-xs text-muted">
         A generated drill is a suggestion. Stop on pain or tension, and defer to a qualified teacher or health professional.
+        {" · "}<Link href="/about" className="underline">About and credits</Link>
       </footer>
     </div>
   );

@@ -58,6 +58,7 @@ export function appRoutes(): AppRoute[] {
  */
 export const PUBLIC_ROUTES: Record<string, string> = {
   "/": "landing page",
+  "/about": "credits and licences, no data",
   "/sign-in": "sign-in form",
   "/sign-up": "teacher sign-up form",
   "/forgot-password": "asks for a password-reset e-mail",
