@@ -7,7 +7,7 @@ import { createClient, type Client } from "@libsql/client";
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { describeViolations, seriousViolations } from "./axe";
-import { launchChromium, shoot } from "./chromium";
+import { launchChromium, screenshotDir, shoot } from "./chromium";
 import { repoRoot } from "./server";
 
 const baseURL = inject("baseURL");
@@ -217,6 +217,14 @@ describe("pieces in the browser", () => {
       // Picking a hardest bar selects it in the score.
       await page.getByRole("heading", { name: "Hardest bars" }).locator("xpath=..").getByRole("button").first().click();
       expect(await page.locator('[data-selected="true"]').count()).toBeGreaterThan(0);
+      await page.setViewportSize({ width, height: 900 });
+      await page.screenshot({ path: `${screenshotDir}/piece-selected-${width}.png` });
+
+      await page.goto("/knots");
+      await page.getByRole("list", { name: "Knots" }).waitFor();
+      found = await seriousViolations(page);
+      expect(found, describeViolations(found)).toEqual([]);
+      await shoot(page, `knots-${width}`);
       await context.close();
     }
   });
