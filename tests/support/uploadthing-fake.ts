@@ -55,7 +55,7 @@ export async function startUploadThingFake(): Promise<UploadThingFake> {
         return json(res, s, { error: "ingest failed" });
       }
       const key = decodeURIComponent(url.pathname.slice(1));
-      const form = await new Request(url, { method: "PUT", headers: req.headers as HeadersInit, body }).formData();
+      const form = await new Request(url, { method: "PUT", headers: req.headers as HeadersInit, body: new Uint8Array(body) }).formData();
       const file = form.get("file");
       if (!(file instanceof Blob)) return json(res, 400, { error: "no file field" });
       files.set(key, { name: (file as File).name, type: file.type, body: Buffer.from(await file.arrayBuffer()) });
