@@ -5,7 +5,7 @@ import type { NextConfig } from "next";
  * styles need 'unsafe-inline'; OSMD's SVG and fonts may use data: URIs; tone's audio worklets and
  * decoded samples use blob: URLs. `next dev` also needs eval for fast refresh.
  */
-const dev = process.env.NODE_ENV !== "production";
+const dev = process.env.NODE_ENV === "development";
 const contentSecurityPolicy = [
   "default-src 'self'",
   `script-src 'self' 'unsafe-inline' blob:${dev ? " 'unsafe-eval'" : ""}`,

@@ -152,9 +152,12 @@ export async function check(dbUrl: string, acks: Acks): Promise<string[]> {
   return problems;
 }
 
-/** Runs the crash loop; resolves with the acknowledged counts, rejects on the first broken invariant. */
-export async function crashTest(kills: number, log: (line: string) => void = console.log): Promise<Acks> {
-  ensureBuild();
+/**
+ * Runs the crash loop; resolves with the acknowledged counts, rejects on the first broken invariant.
+ * `build: false` uses the existing build as it is (the test suite has built it already).
+ */
+export async function crashTest(kills: number, log: (line: string) => void = console.log, opts: { build?: boolean } = {}): Promise<Acks> {
+  if (opts.build !== false) ensureBuild();
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "knotwork-crash-"));
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;

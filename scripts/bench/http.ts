@@ -55,9 +55,9 @@ function sheetPath(ids: SeedIds): { name: string; path: string } {
   return { name: "sheet page (GET /sheets/:id; no sheet JSON route yet)", path: `/sheets/${ids.sheetId}` };
 }
 
-/** Starts a seeded production server, loads each target in turn, stops the server. */
-export async function httpBench(opts: { seconds: number; connections: number }): Promise<HttpTarget[]> {
-  ensureBuild();
+/** Starts a seeded production server, loads each target in turn, stops the server (`build: false`: use the build as it is). */
+export async function httpBench(opts: { seconds: number; connections: number; build?: boolean }): Promise<HttpTarget[]> {
+  if (opts.build !== false) ensureBuild();
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "knotwork-bench-"));
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;

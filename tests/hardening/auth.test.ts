@@ -58,7 +58,7 @@ describe("role escalation", () => {
       "select m.role, m.studio_id, s.name from membership m join user u on u.id = m.user_id join studio s on s.id = m.studio_id where u.email = ?",
       [email],
     );
-    expect(rows).toHaveLength(1);
+    expect(rows, `sign-up answered ${res.status}: ${res.body.slice(-400)}`).toHaveLength(1);
     expect(rows[0]).toMatchObject({ role: "teacher", name: "Ladder Studio" });
     expect(rows[0]!.studio_id).not.toBe(ids.studioId);
     expect(await studioDigest()).toBe(before);

@@ -49,7 +49,8 @@ export function ensureBuild(env: NodeJS.ProcessEnv = process.env): void {
   const tsconfig = path.join(repoRoot, "tsconfig.json");
   const before = fs.readFileSync(tsconfig, "utf8");
   try {
-    run(path.join(repoRoot, "node_modules/.bin/next"), ["build"], { ...env, NEXT_TELEMETRY_DISABLED: "1" });
+    // A production build whatever the caller's NODE_ENV (vitest sets "test").
+    run(path.join(repoRoot, "node_modules/.bin/next"), ["build"], { ...env, NODE_ENV: "production", NEXT_TELEMETRY_DISABLED: "1" });
   } finally {
     if (distDir() !== path.join(repoRoot, ".next")) {
       if (fs.readFileSync(tsconfig, "utf8") !== before) fs.writeFileSync(tsconfig, before);
