@@ -19,7 +19,7 @@ export function OptionsForm({
   if (fields.length === 0) return <p className="text-sm text-muted">No options.</p>;
   const set = (name: string, v: unknown) => onChange({ ...value, [name]: v });
   return (
-    <fieldset className="grid gap-3 @sm:grid-cols-2" aria-label={`${family.label} options`}>
+    <fieldset className="grid gap-3 @xs:grid-cols-2" aria-label={`${family.label} options`}>
       {fields.map((f) => {
         const id = `${base}-${f.name}`;
         if (f.kind === "boolean") {
@@ -32,7 +32,7 @@ export function OptionsForm({
         }
         if (f.kind === "multi") {
           return (
-            <fieldset key={f.name} className="flex flex-col gap-1 @sm:col-span-2">
+            <fieldset key={f.name} className="flex flex-col gap-1 @xs:col-span-2">
               <legend className="text-xs font-bold text-walnut">{f.label}</legend>
               <div className="flex flex-wrap gap-x-4 gap-y-1">
                 {f.choices.map((c) => (
