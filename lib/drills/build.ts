@@ -242,7 +242,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const memo = ctx.fingeringMemo ?? newFingeringMemo();
   // Laid events carry every field the fingering estimate reads (pitch, onset, tie, measure, fingering).
   const fingers = estimatedFingers(ordered as unknown as NoteEvent[], (i) => ordered[i]!.hand, {
-    passage, sources: ordered.map((e) => e.source), memo,
+    passage, sources: ordered.map((e) => e.source), likes: ordered.map((e) => e.like), memo,
   });
   const events: NoteEvent[] = ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand), fingers[i] ?? null));
 

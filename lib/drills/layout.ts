@@ -13,6 +13,11 @@ export { impliedTuplet, writtenPieces } from "./written-pieces";
 export interface SlotNote {
   readonly pitch: Pitch;
   readonly source?: NoteEvent;
+  /**
+   * A passage note this note stands for when moved (a sequence step, another octave): its
+   * estimated finger is suggested, but its written fingering is not copied.
+   */
+  readonly like?: NoteEvent;
   /** A fingering the drill prescribes (e.g. standard scale fingering), marked "drill". */
   readonly fingering?: readonly Fingering[];
 }
@@ -43,6 +48,8 @@ export interface LaidEvent extends Omit<NoteEvent, "id" | "part" | "staff" | "vo
   readonly hand: Hand;
   /** The passage note this note plays (its fingering can be carried over). */
   readonly source?: NoteEvent;
+  /** The passage note this moved note stands for (see `SlotNote.like`). */
+  readonly like?: NoteEvent;
 }
 
 /**
@@ -170,6 +177,7 @@ function layHand(
           chord: k > 0,
           tie,
           ...(n.source ? { source: n.source } : {}),
+          ...(n.like ? { like: n.like } : {}),
           ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
           ...(chosen ? { fingering: chosen, fingeringSource: "drill" as const } : {}),
           ...(first ? extra : {}),

@@ -96,6 +96,8 @@ export interface FingeringCarry {
   readonly passage: Passage;
   /** Per event (same order as the events): the passage note it plays, if any. */
   readonly sources: readonly (NoteEvent | undefined)[];
+  /** Per event: the passage note a moved note stands for (same finger suggested, any interval). */
+  readonly likes?: readonly (NoteEvent | undefined)[];
   readonly memo: FingeringMemo;
 }
 
@@ -136,8 +138,10 @@ export function estimatedFingers(events: readonly NoteEvent[], handOf: (i: numbe
       hints = idx.map((i) => {
         const src = carry.sources[i];
         const e = events[i]!;
-        if (!src?.pitch || !e.pitch || src.staff !== staff || (e.pitch.midi - src.pitch.midi) % 12 !== 0) return null;
-        return fromPassage.get(src.id) ?? null;
+        if (!e.pitch) return null;
+        if (src?.pitch && src.staff === staff && (e.pitch.midi - src.pitch.midi) % 12 === 0) return fromPassage.get(src.id) ?? null;
+        const like = carry.likes?.[i];
+        return like && like.staff === staff ? fromPassage.get(like.id) ?? null : null;
       });
     }
     const key = carry ? sequenceKey(hand, handEvents, hints) : "";

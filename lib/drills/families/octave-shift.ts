@@ -58,7 +58,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: OctaveShiftOptions, ctx:
     if (!path.some((k) => k !== 0)) continue;
     const slots: Slot[] = path.flatMap((k) =>
       timelineSlots(
-        g.sonorities.map((s) => ({ ...sonorityItem(s), notes: s.notes.map((n) => (k === 0 ? { pitch: n.pitch!, source: n } : { pitch: shiftOctave(n.pitch!, k) })) })),
+        g.sonorities.map((s) => ({ ...sonorityItem(s), notes: s.notes.map((n) => (k === 0 ? { pitch: n.pitch!, source: n } : { pitch: shiftOctave(n.pitch!, k), like: n })) })),
         g.onset,
         end,
       ),

@@ -103,3 +103,17 @@ describe("sequence", () => {
     );
   });
 });
+
+describe("sequence fingering", () => {
+  test("each moved figure is fingered like the figure as written (the same shape, common practice)", () => {
+    // 2-3-5-3 is the written fingering; a free estimate of D F A F would start on the thumb.
+    const p = makePassage({ right: "C4/8@2 E4/8@3 G4/8@5 E4/8@3" });
+    const d = generateSequence(p, sequenceOptions.parse({ mirror: false, repetitions: 3 }), makeContext()).drills[0]!;
+    const fingers = d.score.events.filter((e) => e.pitch && e.staff === 1).map((e) => e.fingering?.[0]?.finger);
+    expect(fingers).toHaveLength(12);
+    expect(fingers.slice(0, 4)).toEqual([2, 3, 5, 3]);
+    expect(fingers.slice(4, 8)).toEqual(fingers.slice(0, 4));
+    expect(fingers.slice(8, 12)).toEqual(fingers.slice(0, 4));
+    expect(d.score.events.filter((e) => e.pitch).slice(4).every((e) => d.fingeringSource[e.id] === "estimated")).toBe(true);
+  });
+});

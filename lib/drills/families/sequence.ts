@@ -109,7 +109,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
   const slotsOf = (which: "main" | "mirror", n: number): Slot[] =>
     reps.slice(0, n).flatMap((r, k) =>
       r[which].map((ps, i) => {
-        const notes: SlotNote[] = ps.map((pitch, j) => (k === 0 && which === "main" ? { pitch, source: sons[i].notes[j] } : { pitch }));
+        const notes: SlotNote[] = ps.map((pitch, j) => (k === 0 && which === "main" ? { pitch, source: sons[i].notes[j] } : which === "main" ? { pitch, like: sons[i].notes[j] } : { pitch }));
         const tuplet = tupletFor(durations[i], sons[i].notes[0].written.tuplet);
         return { duration: durations[i], notes, ...(tuplet ? { tuplet } : {}) };
       }),
