@@ -4,6 +4,8 @@
  * - `server/app/<route>/page_client-reference-manifest.js` → `entryJSFiles` (the chunks of the
  *   page, its layouts and their boundaries).
  * Lazily loaded chunks are found by following the chunk paths each chunk names, transitively.
+ * Checked in chromium against the production server: every listed first-load chunk is requested on
+ * the first visit (the browser then also prefetches linked routes, which this does not count).
  */
 import fs from "node:fs";
 import path from "node:path";
