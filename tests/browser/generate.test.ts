@@ -64,6 +64,8 @@ describe("generate drills for a knot and save a drill sheet", () => {
     for (let i = 1; i <= 12; i++) await page.mouse.move(from.x + from.width / 2, from.y + (to.y + 5 - from.y) * (i / 12));
     await page.mouse.up();
     await page.waitForFunction((k) => document.querySelector('[data-testid="sheet-item"]')?.getAttribute("data-key") === k, keys[2]);
+    // dnd-kit swallows clicks for 50 ms after a drop (its pointer sensor's click guard); a person is slower.
+    await page.waitForTimeout(150);
     // Then a move button: the (now) last drill goes up one.
     await page.locator(`[data-testid="sheet-item"][data-key="${keys[1]}"] button[aria-label^="Move"][aria-label$=" up"]`).click();
     const expected = [keys[2], keys[1], keys[0]];
@@ -139,6 +141,9 @@ describe("generate drills for a knot and save a drill sheet", () => {
       await Promise.all(["MusicXML", ".mxl", "MIDI"].map(async (f) => [f, await first.locator(`a[aria-label$=" as ${f}"]`).getAttribute("href")] as const)),
     );
     savedMidiHref = hrefs.MIDI!;
+    // The sheet links back to the knot it came from and to that knot's piece.
+    await expect(page.getByTestId("sheet-knot-link").getAttribute("href")).resolves.toBe(knotPath);
+    await expect(page.getByTestId("sheet-piece-link").getAttribute("href")).resolves.toMatch(/^\/pieces\/[^/]+$/);
     const xml = await page.request.get(hrefs.MusicXML!);
     // MusicXML 4.0 container.xsd: the recommended media types for uncompressed and compressed files.
     expect(xml.headers()["content-type"]).toBe("application/vnd.recordare.musicxml+xml");
@@ -170,6 +175,19 @@ describe("generate drills for a knot and save a drill sheet", () => {
       await page.getByRole("button", { name: "Generate" }).click();
       await waitForEngravings(page, 2);
       await page.locator('[data-testid="drill-card"] input[aria-label^="Pick"]').first().check();
+      if (width >= 1024) {
+        // Wide screens: the drill sheet sits beside the previews and stays in view while they scroll;
+        // the Generate button sits below the families' own scroll area, covering none of it.
+        await page.evaluate(() => window.scrollTo(0, document.documentElement.scrollHeight));
+        const builder = (await page.locator("#sheet-builder").boundingBox())!;
+        const previews = (await page.getByRole("region", { name: "Drill previews" }).boundingBox())!;
+        expect(builder.x).toBeGreaterThan(previews.x + previews.width - 1);
+        expect(builder.y).toBeGreaterThanOrEqual(0);
+        expect(builder.y + builder.height).toBeLessThanOrEqual(900);
+        const families = (await page.getByTestId("family-panel").boundingBox())!;
+        const generate = (await page.getByRole("button", { name: "Generate" }).boundingBox())!;
+        expect(generate.y).toBeGreaterThanOrEqual(families.y + families.height);
+      }
       const onGenerate = await seriousViolations(page);
       expect(onGenerate, describeViolations(onGenerate)).toEqual([]);
       await page.evaluate(() => window.scrollTo(0, 0));
