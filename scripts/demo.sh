@@ -22,6 +22,8 @@ if [ -z "${BETTER_AUTH_SECRET:-}" ]; then
   export BETTER_AUTH_SECRET
 fi
 
+node scripts/copy-samples.mjs
+
 echo "Applying migrations and seeding the demo studio…"
 npx tsx db/seed.ts
 

@@ -23,6 +23,7 @@ if [ "${#missing[@]}" -gt 0 ]; then
 fi
 
 mkdir -p artifacts
+node scripts/copy-samples.mjs
 passed=0
 failed=0
 status=0
