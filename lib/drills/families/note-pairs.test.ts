@@ -54,4 +54,13 @@ describe("note-pairs", () => {
     expect(r.drills).toHaveLength(0);
     expect(r.skipped).toBeTruthy();
   });
+  test("a hand with chords pairs only connections that involve a chord; single notes alone carry no count", () => {
+    const mixed = makePassage({ right: "C4/4 D4/4 [E4,G4]/4 C4/4" });
+    const titles = notePairs.generate(mixed, notePairsOptions.parse({}), makeContext()).drills.map((d) => d.title);
+    expect(titles).toEqual(["Note pairs D4 → E4+G4 (3 of 3)", "Note pairs E4+G4 → C4 (3 of 3)"]);
+    const single = makePassage({ right: "C4/4 D4/4" });
+    expect(notePairs.generate(single, notePairsOptions.parse({}), makeContext()).drills.map((d) => d.title)).toEqual([
+      "Note pairs C4 → D4",
+    ]);
+  });
 });

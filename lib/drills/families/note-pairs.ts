@@ -71,18 +71,21 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
   const hands = passageHands(passage);
   for (const hand of hands) {
     const sons = passage.sonorities[hand];
+    // Pairs that involve a chord teach the most; single-note pairs only when the hand has no chords.
+    const hasChordPair = sons.some((s, i) => i + 1 < sons.length && s.notes.length + sons[i + 1].notes.length > 2);
     const seen = new Set<string>();
     for (let i = 0; i + 1 < sons.length && seen.size < options.maxPairs; i++) {
       const [A, B] = [sons[i], sons[i + 1]];
       const key = `${label(A)}>${label(B)}`;
       if (label(A) === label(B) || seen.has(key)) continue;
+      if (hasChordPair && A.notes.length + B.notes.length === 2) continue;
       seen.add(key);
       const all = noteCells(A.notes.length, B.notes.length);
       const shown = all.slice(0, options.maxCells);
       const slots: Slot[] = shown.flatMap(([x, y], c) => {
         const cell: Slot[] = [];
         for (let r = 0; r < options.repeats; r++) {
-          cell.push({ duration: v, notes: x.map((k) => noteOf(A.notes[k])), ...(c === 0 && r === 0 ? { words: `${shown.length} of ${all.length}` } : {}) });
+          cell.push({ duration: v, notes: x.map((k) => noteOf(A.notes[k])), ...(c === 0 && r === 0 && all.length > 1 ? { words: `${shown.length} of ${all.length}` } : {}) });
           cell.push({ duration: v, notes: y.map((k) => noteOf(B.notes[k])) });
         }
         return [...cell, restSlot(v.mul(2))];
@@ -93,7 +96,7 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
           {
             family: "note-pairs",
             variant: `pair-${i + 1}`,
-            title: `Note pairs ${label(A)} → ${label(B)} (${shown.length} of ${all.length})${hands.length > 1 ? `, ${hand} hand` : ""}`,
+            title: `Note pairs ${label(A)} → ${label(B)}${all.length > 1 ? ` (${shown.length} of ${all.length})` : ""}${hands.length > 1 ? `, ${hand} hand` : ""}`,
             teacherNote: `Each small cell isolates one connection between the two positions: ${shown.length} of the ${all.length} possible cells, the simplest first.`,
             studentNote: "Play each cell slowly and evenly as written, rest, then the next. Keep the fingers close to the keys.",
             hands: hand,
