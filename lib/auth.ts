@@ -21,6 +21,8 @@ function localTwins(baseURL: string): string[] {
 /** Shortest password Knotwork accepts; the sign-up form and invitation form share it. */
 export const MIN_PASSWORD_LENGTH = 8;
 export const MAX_PASSWORD_LENGTH = 128;
+/** How long the signed session copy in the browser is trusted without a database look-up. */
+export const SESSION_COOKIE_CACHE_SECONDS = 5 * 60;
 
 /**
  * better-auth, e-mail + password. Accounts are never created through better-auth's own sign-up
@@ -52,7 +54,14 @@ export const auth = betterAuth({
       "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: 10 },
     },
   },
-  session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
+  session: {
+    expiresIn: 60 * 60 * 24 * 14,
+    updateAge: 60 * 60 * 24,
+    // A signed copy of the session in a second cookie: most requests skip the session and user
+    // lookups. Trade-off: a signed-out or revoked session keeps working for up to maxAge seconds
+    // on a browser that still holds the copy (DEVELOPERS.md, "Sessions").
+    cookieCache: { enabled: true, maxAge: SESSION_COOKIE_CACHE_SECONDS },
+  },
   plugins: [nextCookies()],
 });
 

@@ -4,7 +4,7 @@ import { cache } from "react";
 import { db } from "../db";
 import { findMembershipForUser } from "../db/queries/memberships";
 import type { Role } from "../db/schema";
-import { auth } from "./auth";
+import { auth, type AuthSession } from "./auth";
 
 export interface StudioContext {
   user: { id: string; name: string; email: string };
@@ -14,9 +14,15 @@ export interface StudioContext {
   role: Role;
 }
 
+/**
+ * better-auth's session for this request, looked up once per request (React cache). With the
+ * session cookie cache on (lib/auth.ts) this is usually a signature check, not a database read.
+ */
+export const getAuthSession = cache(async (): Promise<AuthSession | null> => auth.api.getSession({ headers: await headers() }));
+
 /** The signed-in user with their studio and role, or null when anonymous (or without a studio). */
 export const getStudioContext = cache(async (): Promise<StudioContext | null> => {
-  const session = await auth.api.getSession({ headers: await headers() });
+  const session = await getAuthSession();
   if (!session) return null;
   const member = await findMembershipForUser(db, session.user.id);
   if (!member) return null;
@@ -29,13 +35,12 @@ export const getStudioContext = cache(async (): Promise<StudioContext | null> =>
   };
 });
 
-/** Any signed-in member. Anonymous callers go to the sign-in page. */
+/** Any signed-in member. Anonymous callers go to the sign-in page; a user without a studio gets 403. */
 export async function requireUser(): Promise<StudioContext> {
-  const session = await auth.api.getSession({ headers: await headers() });
-  if (!session) redirect("/sign-in");
   const ctx = await getStudioContext();
-  if (!ctx) forbidden();
-  return ctx;
+  if (ctx) return ctx;
+  if (!(await getAuthSession())) redirect("/sign-in");
+  forbidden();
 }
 
 /** A teacher of the caller's studio; a student gets 403. */
