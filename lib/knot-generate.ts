@@ -5,8 +5,9 @@
 import { generateDrills, type Drill, type HandProfile } from "./drills/index";
 import { drillKeys, toDrillDto, type DrillDto } from "./drill-dto";
 import type { GenerateRequest } from "./generate-request";
-import { barIndex, readScore, selectPassage } from "./score/index";
-import type { Passage } from "./score/types";
+import { barIndex, selectPassage } from "./score/index";
+import type { Passage, Score } from "./score/types";
+import { parsedScore } from "./score-cache";
 import { writeMusicXML } from "./score/write";
 
 export interface KnotSource {
@@ -16,6 +17,14 @@ export interface KnotSource {
   /** Printed bar numbers, as the teacher marked them. */
   fromBar: number;
   toBar: number;
+  /** The piece's id and last change: when both are given, its parsed copy is reused across requests. */
+  scoreId?: string;
+  scoreUpdatedAt?: Date;
+}
+
+/** The piece parsed from the stored copy (cached per piece id and change stamp when known). */
+function sourceScore(src: KnotSource): Score {
+  return parsedScore(src.musicxml, src.scoreId && src.scoreUpdatedAt ? { id: src.scoreId, updatedAt: src.scoreUpdatedAt } : undefined);
 }
 
 /** Printed bar number → measure index (falls back to counting from 1 when the number is not printed). */
@@ -25,7 +34,11 @@ function indexOf(score: Parameters<typeof barIndex>[0], bar: number): number {
 
 /** The knot's passage from the stored cleaned copy. */
 export function knotPassage(src: KnotSource): Passage {
-  const { score } = readScore(src.musicxml);
+  return passageOf(sourceScore(src), src);
+}
+
+/** The knot's bars of an already parsed piece. */
+export function passageOf(score: Score, src: Pick<KnotSource, "part" | "hand" | "fromBar" | "toBar">): Passage {
   const from = indexOf(score, src.fromBar);
   const to = Math.max(from, indexOf(score, src.toBar));
   return selectPassage(score, { part: src.part, hand: src.hand, from, to });
@@ -38,7 +51,11 @@ export interface KnotDrills {
 
 /** Run the request on the knot; the same request always gives the same drills (fixed seed). */
 export function generateForKnot(src: KnotSource, req: GenerateRequest, profile?: HandProfile): KnotDrills {
-  const passage = knotPassage(src);
+  return generateForPassage(knotPassage(src), req, profile);
+}
+
+/** The request run on a passage already cut out of its piece. */
+export function generateForPassage(passage: Passage, req: GenerateRequest, profile?: HandProfile): KnotDrills {
   const result = generateDrills(passage, { families: req.families, options: req.options, profile, seed: req.seed ?? 1 });
   const keys = drillKeys(result.drills);
   return { drills: result.drills.map((drill, i) => ({ drill, key: keys[i] })), skipped: result.skipped };
@@ -51,7 +68,7 @@ export function knotDrillsJson(out: KnotDrills): { drills: DrillDto[]; skipped: 
 
 /** The knot's bars (all staves of its part) as a small MusicXML score for engraving. */
 export function knotExcerpt(src: KnotSource): string {
-  const { score } = readScore(src.musicxml);
+  const score = sourceScore(src);
   const from = indexOf(score, src.fromBar);
   const to = Math.max(from, indexOf(score, src.toBar));
   const part = score.parts.find((p) => p.id === src.part) ?? score.parts[0];

@@ -17,6 +17,8 @@ export async function getKnotSource(database: Db, studioId: string, knotId: stri
       toBar: passage.toBar,
       tags: passage.tags,
       note: passage.note,
+      knotUpdatedAt: passage.updatedAt,
+      scoreUpdatedAt: score.updatedAt,
       musicxml: score.musicxml,
     })
     .from(passage)
@@ -24,6 +26,39 @@ export async function getKnotSource(database: Db, studioId: string, knotId: stri
     .where(inStudio(passage, studioId, eq(passage.id, knotId)))
     .limit(1);
   return row ?? null;
+}
+
+/**
+ * One knot of the studio with its piece's id and both rows' change stamps, without the MusicXML
+ * (the generate handler reads the piece only when its parsed copy is not cached).
+ */
+export async function getKnotStamp(database: Db, studioId: string, knotId: string) {
+  const [row] = await database
+    .select({
+      id: passage.id,
+      scoreId: passage.scoreId,
+      part: passage.part,
+      hand: passage.hand,
+      fromBar: passage.fromBar,
+      toBar: passage.toBar,
+      knotUpdatedAt: passage.updatedAt,
+      scoreUpdatedAt: score.updatedAt,
+    })
+    .from(passage)
+    .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .where(inStudio(passage, studioId, eq(passage.id, knotId)))
+    .limit(1);
+  return row ?? null;
+}
+
+/** A piece's cleaned MusicXML, or null (unknown id or another studio). */
+export async function getScoreMusicXml(database: Db, studioId: string, scoreId: string): Promise<string | null> {
+  const [row] = await database
+    .select({ musicxml: score.musicxml })
+    .from(score)
+    .where(inStudio(score, studioId, eq(score.id, scoreId)))
+    .limit(1);
+  return row?.musicxml ?? null;
 }
 
 /** The studio's students who have a hand profile, for the "whose hand" chooser. */

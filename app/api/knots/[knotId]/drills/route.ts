@@ -1,12 +1,17 @@
+import { db } from "@/db";
+import { getHandProfile, getKnotStamp, getScoreMusicXml } from "@/db/queries/knot-drills";
 import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
 import { GenerateRequest, requestProblems } from "@/lib/generate-request";
-import { knotDrillsJson } from "@/lib/knot-generate";
-import { drillsForStudioKnot } from "@/lib/knot-request";
+import { knotDrillsBody } from "@/lib/knot-drills-cache";
 import { isScoreError } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
 
-/** POST { families, options, profile? } → { drills, skipped } for one knot of the teacher's studio. */
+/**
+ * POST { families, options, profile?, seed? } → { drills, skipped } for one knot of the teacher's
+ * studio. The answer is deterministic, so it comes from lib/knot-drills-cache when the knot, its
+ * piece, the request and the hand are unchanged.
+ */
 export async function POST(request: Request, { params }: { params: Promise<{ knotId: string }> }) {
   const ctx = await apiTeacher();
   if (ctx instanceof Response) return ctx;
@@ -14,10 +19,16 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
   const body = await request.json().catch(() => undefined);
   const parsed = GenerateRequest.safeParse(body);
   if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
+  const req = parsed.data;
+  const [knot, profile] = await Promise.all([
+    getKnotStamp(db, ctx.studioId, knotId),
+    req.profile ? getHandProfile(db, ctx.studioId, req.profile) : Promise.resolve(undefined),
+  ]);
+  if (!knot || profile === null) return notFoundResponse();
   try {
-    const out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
-    if (!out) return notFoundResponse();
-    return Response.json(knotDrillsJson(out));
+    const json = await knotDrillsBody(knot, req, profile, () => getScoreMusicXml(db, ctx.studioId, knot.scoreId));
+    if (json === null) return notFoundResponse();
+    return new Response(json, { headers: { "content-type": "application/json" } });
   } catch (err) {
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
     throw err;

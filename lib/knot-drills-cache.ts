@@ -1,0 +1,90 @@
+/**
+ * The generate handler's answers, reused: drills are deterministic for (knot, request, seed, hand
+ * profile), so the JSON body is kept in a bounded LRU keyed by the knot and its piece with their
+ * change stamps plus a stable hash of the validated request and the hand measurements. Editing the
+ * knot or the piece changes the key, so nothing has to be invalidated by hand.
+ */
+import { createHash } from "node:crypto";
+import type { HandProfile } from "./drills/index";
+import type { GenerateRequest } from "./generate-request";
+import { generateForPassage, knotDrillsJson, passageOf, type KnotSource } from "./knot-generate";
+import { Lru } from "./lru";
+import { parsedScore, cachedScore } from "./score-cache";
+
+/** What the handler knows about a knot before reading its piece (db/queries/knot-drills getKnotStamp). */
+export interface KnotStamp extends Pick<KnotSource, "part" | "hand" | "fromBar" | "toBar"> {
+  id: string;
+  scoreId: string;
+  knotUpdatedAt: Date;
+  scoreUpdatedAt: Date;
+}
+
+const MAX_BODIES = 256;
+const MAX_CHARS = 32 * 1024 * 1024;
+const bodies = new Lru<string, string>({ maxEntries: MAX_BODIES, maxWeight: MAX_CHARS, weigh: (s) => s.length });
+const pending = new Map<string, Promise<string | null>>();
+
+/** JSON with object keys sorted at every level, so equal requests give equal text. */
+export function stableJson(value: unknown): string {
+  if (Array.isArray(value)) return `[${value.map(stableJson).join(",")}]`;
+  if (value && typeof value === "object") {
+    const entries = Object.entries(value as Record<string, unknown>).filter(([, v]) => v !== undefined);
+    entries.sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+    return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${stableJson(v)}`).join(",")}}`;
+  }
+  return JSON.stringify(value) ?? "null";
+}
+
+/** The cache key of one generate call. */
+export function drillsCacheKey(knot: KnotStamp, req: GenerateRequest, profile?: HandProfile): string {
+  const what = stableJson({
+    knot: [knot.id, knot.knotUpdatedAt.getTime(), knot.part, knot.hand, knot.fromBar, knot.toBar],
+    piece: [knot.scoreId, knot.scoreUpdatedAt.getTime()],
+    families: req.families,
+    options: req.options,
+    seed: req.seed ?? 1,
+    profile: profile ?? null,
+  });
+  return createHash("sha256").update(what).digest("base64url");
+}
+
+/**
+ * The generate handler's JSON body for the knot, from the cache or freshly generated. The piece's
+ * MusicXML is loaded only when its parsed copy is not cached; null when it is gone. Throws ScoreError
+ * when the knot's bars cannot be read (nothing is cached then).
+ */
+export async function knotDrillsBody(
+  knot: KnotStamp,
+  req: GenerateRequest,
+  profile: HandProfile | undefined,
+  loadMusicXml: () => Promise<string | null>,
+): Promise<string | null> {
+  const key = drillsCacheKey(knot, req, profile);
+  const hit = bodies.get(key);
+  if (hit !== undefined) return hit;
+  const running = pending.get(key);
+  if (running) return running;
+  const work = (async () => {
+    const stamp = { id: knot.scoreId, updatedAt: knot.scoreUpdatedAt };
+    let score = cachedScore(stamp);
+    if (!score) {
+      const xml = await loadMusicXml();
+      if (xml === null) return null;
+      score = parsedScore(xml, stamp);
+    }
+    const body = JSON.stringify(knotDrillsJson(generateForPassage(passageOf(score, knot), req, profile)));
+    bodies.set(key, body);
+    return body;
+  })();
+  pending.set(key, work);
+  try {
+    return await work;
+  } finally {
+    pending.delete(key);
+  }
+}
+
+/** Empties the cache (tests). */
+export function clearKnotDrillsCache(): void {
+  bodies.clear();
+}
