@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { authClient } from "@/lib/auth-client";
+import { authRequest } from "@/lib/auth-request";
 import { Button } from "../ui/button";
 import { Field, FormMessage } from "../ui/field";
 
@@ -13,16 +13,16 @@ export function SignInForm() {
     const form = new FormData(event.currentTarget);
     setPending(true);
     setMessage(null);
-    const { error } = await authClient.signIn.email({
+    const answer = await authRequest("sign-in/email", {
       email: String(form.get("email") ?? "").trim(),
       password: String(form.get("password") ?? ""),
     });
-    if (error) {
+    if (!answer.ok) {
       setPending(false);
       setMessage(
-        error.status === 429
+        answer.status === 429
           ? "Too many attempts. Please wait a minute and try again."
-          : error.status === 401
+          : answer.status === 401
             ? "That e-mail and password do not match an account."
             : "Signing in did not work just now. Please try again.",
       );

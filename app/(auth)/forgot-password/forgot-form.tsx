@@ -2,9 +2,9 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
-import { authClient } from "@/lib/auth-client";
+import { authRequest } from "@/lib/auth-request";
 
-/** Asks better-auth for a reset link; the answer is the same whether or not the e-mail has an account. */
+/** Asks the auth server for a reset link; the answer is the same whether or not the e-mail has an account. */
 export function ForgotForm() {
   const [state, setState] = useState<"idle" | "sending" | "sent" | "error">("idle");
   async function submit(e: React.FormEvent<HTMLFormElement>) {
@@ -12,8 +12,8 @@ export function ForgotForm() {
     const email = String(new FormData(e.currentTarget).get("email") ?? "").trim();
     if (!email) return setState("error");
     setState("sending");
-    const { error } = await authClient.requestPasswordReset({ email, redirectTo: "/reset-password" });
-    setState(error ? "error" : "sent");
+    const answer = await authRequest("request-password-reset", { email, redirectTo: "/reset-password" });
+    setState(answer.ok ? "sent" : "error");
   }
   if (state === "sent") return <p role="status" className="text-sm">If an account uses that e-mail, a reset link is on its way. It works for one hour.</p>;
   return (

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
-import { authClient } from "@/lib/auth-client";
+import { authRequest } from "@/lib/auth-request";
 
 /** Sets a new password with the token from the reset e-mail. */
 export function ResetForm({ token }: { token: string }) {
@@ -13,8 +13,8 @@ export function ResetForm({ token }: { token: string }) {
     const newPassword = String(new FormData(e.currentTarget).get("password") ?? "");
     if (newPassword.length < 8) return setState({ status: "idle", error: "At least 8 characters, please." });
     setState({ status: "saving" });
-    const { error } = await authClient.resetPassword({ newPassword, token });
-    setState(error ? { status: "idle", error: "This reset link is no longer valid. Ask for a new one." } : { status: "done" });
+    const answer = await authRequest("reset-password", { newPassword, token });
+    setState(!answer.ok ? { status: "idle", error: "This reset link is no longer valid. Ask for a new one." } : { status: "done" });
   }
   if (state.status === "done") {
     return <p role="status" className="text-sm">Your password is changed. <Link className="underline" href="/sign-in">Sign in</Link></p>;
