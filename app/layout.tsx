@@ -1,5 +1,4 @@
 import type { Metadata, Viewport } from "next";
-import { Providers } from "@/components/providers";
 import { figuresFont, headingFont, textFont } from "./fonts";
 import "./globals.css";
 
@@ -15,7 +14,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en" className={`${textFont.variable} ${figuresFont.variable} ${headingFont.variable}`}>
       <body className="bg-paper font-sans text-ink antialiased">
-        <Providers>{children}</Providers>
+        {children}
       </body>
     </html>
   );

@@ -18,3 +18,10 @@ export async function fetchPieces(): Promise<PieceListRow[]> {
   if (!res.ok) throw new Error("The pieces could not be loaded.");
   return ((await res.json()) as { pieces: PieceListRow[] }).pieces;
 }
+
+const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
+
+/** The upload day as the pieces table shows it, e.g. "3 Mar 2025". */
+export function formatUploaded(iso: string): string {
+  return dateFormat.format(new Date(iso));
+}

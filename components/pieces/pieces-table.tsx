@@ -1,6 +1,6 @@
 "use client";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
   createColumnHelper,
@@ -11,16 +11,31 @@ import {
   useReactTable,
   type SortingState,
 } from "@tanstack/react-table";
+import { QueryProvider } from "../providers";
 import { DeletePieceDialog } from "./delete-piece-dialog";
-import { fetchPieces, pieceKeys, type PieceListRow } from "./piece-keys";
+import { fetchPieces, formatUploaded, pieceKeys, type PieceListRow } from "./piece-keys";
 
 const col = createColumnHelper<PieceListRow>();
-const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
-/** The studio's pieces: sortable columns, a filter box, and delete with confirmation. */
+/**
+ * The studio's pieces: sortable columns, a filter box, and delete with confirmation. Loaded lazily
+ * by the pieces list, so TanStack Query and Table are not part of the page's first load.
+ */
 export function PiecesTable({ initial }: { initial: PieceListRow[] }) {
+  return (
+    <QueryProvider>
+      <InteractivePiecesTable initial={initial} />
+    </QueryProvider>
+  );
+}
+
+function InteractivePiecesTable({ initial }: { initial: PieceListRow[] }) {
   const queryClient = useQueryClient();
   const { data = [], isError } = useQuery({ queryKey: pieceKeys.list(), queryFn: fetchPieces, initialData: initial });
+  // The server's list is the freshest: it arrives again after an upload refreshes the page.
+  useEffect(() => {
+    queryClient.setQueryData(pieceKeys.list(), initial);
+  }, [initial, queryClient]);
   const [sorting, setSorting] = useState<SortingState>([{ id: "createdAt", desc: true }]);
   const [filter, setFilter] = useState("");
   const [toDelete, setToDelete] = useState<PieceListRow | null>(null);
@@ -40,7 +55,7 @@ export function PiecesTable({ initial }: { initial: PieceListRow[] }) {
       }),
       col.accessor((r) => r.composer ?? "", { id: "composer", header: "Composer", cell: (c) => c.getValue() || <span className="text-muted">not given</span> }),
       col.accessor("bars", { header: "Bars", cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
-      col.accessor("createdAt", { header: "Uploaded", cell: (c) => dateFormat.format(new Date(c.getValue())), enableGlobalFilter: false }),
+      col.accessor("createdAt", { header: "Uploaded", cell: (c) => formatUploaded(c.getValue()), enableGlobalFilter: false }),
       col.accessor("knots", { header: "Knots", cell: (c) => <span className="font-mono">{c.getValue()}</span> }),
       col.display({
         id: "actions",

@@ -1,9 +1,8 @@
 "use client";
 import Link from "next/link";
 import { useId, useRef, useState } from "react";
-import { useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
-import { pieceKeys } from "./piece-keys";
 import { sendPiece } from "./upload-request";
 
 const MAX_BYTES = 5 * 1024 * 1024;
@@ -17,7 +16,7 @@ type State =
 
 /** Upload of a MusicXML piece: drop zone or file picker, rights confirmation, progress and plain-word errors. */
 export function UploadForm() {
-  const queryClient = useQueryClient();
+  const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [file, setFile] = useState<File | null>(null);
   const [confirmed, setConfirmed] = useState(false);
@@ -42,7 +41,8 @@ export function UploadForm() {
       setFile(null);
       setConfirmed(false);
       if (input.current) input.current.value = "";
-      await queryClient.invalidateQueries({ queryKey: pieceKeys.all });
+      // The page renders the list again with the new piece; the interactive table takes it from there.
+      router.refresh();
     } else {
       setState({ kind: "failed", message: answer.body.error ?? "The upload failed." });
     }

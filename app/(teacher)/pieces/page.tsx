@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { Card, PageHeader } from "@/components/ui/card";
-import { PiecesTable } from "@/components/pieces/pieces-table";
+import { PiecesList } from "@/components/pieces/pieces-list";
+import { PiecesPlainTable } from "@/components/pieces/pieces-plain-table";
 import { UploadForm } from "@/components/pieces/upload-form";
 import { db } from "@/db";
 import { listScoresWithKnots } from "@/db/queries/scores";
@@ -22,7 +23,9 @@ export default async function PiecesPage() {
         </Card>
         <section aria-labelledby="pieces-list-title" className="min-w-0">
           <h2 id="pieces-list-title" className="sr-only">Your pieces</h2>
-          <PiecesTable initial={pieces} />
+          <PiecesList initial={pieces}>
+            <PiecesPlainTable pieces={pieces} />
+          </PiecesList>
         </section>
       </div>
     </div>

@@ -6,6 +6,7 @@ import { Caution } from "@/components/drills/caution";
 import { DrillEngraving } from "@/components/drills/drill-engraving";
 import type { FamilyInfo, JsonSchema } from "@/components/drills/family-options";
 import { GenerateWorkspace } from "@/components/drills/generate-workspace";
+import { QueryProvider } from "@/components/providers";
 import { db } from "@/db";
 import { getKnotSource, listHandProfiles } from "@/db/queries/knot-drills";
 import { DEFAULT_PROFILE, families, suggestFamilies, type ProblemTag } from "@/lib/drills";
@@ -57,7 +58,9 @@ export default async function KnotGeneratePage({ params }: { params: Promise<{ k
         </div>
       </header>
       <Caution />
-      <GenerateWorkspace knotId={knot.id} families={infos} suggested={suggested} hands={hands} defaultSpanMm={Math.round(DEFAULT_PROFILE.spanMm)} />
+      <QueryProvider>
+        <GenerateWorkspace knotId={knot.id} families={infos} suggested={suggested} hands={hands} defaultSpanMm={Math.round(DEFAULT_PROFILE.spanMm)} />
+      </QueryProvider>
     </div>
   );
 }
