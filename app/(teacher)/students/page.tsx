@@ -7,7 +7,9 @@ import { listOpenInvitations } from "@/db/queries/invitations";
 import { listStudents } from "@/db/queries/students";
 import { requireTeacher } from "@/lib/session";
 import { InviteForm } from "./invite-form";
-import { StudentsTable, type StudentRow } from "./students-table";
+import type { StudentRow } from "./student-row";
+import { StudentsList } from "./students-list";
+import { StudentsPlainTable } from "./students-plain-table";
 
 export const metadata: Metadata = { title: "Students" };
 export const dynamic = "force-dynamic";
@@ -36,7 +38,9 @@ export default async function StudentsPage() {
       {rows.length === 0 ? (
         <EmptyState title="No students yet">Invite a student by e-mail. They set their own password and see only the sheets you assign to them.</EmptyState>
       ) : (
-        <StudentsTable rows={rows} />
+        <StudentsList rows={rows}>
+          <StudentsPlainTable rows={rows} />
+        </StudentsList>
       )}
     </div>
   );

@@ -1,17 +1,11 @@
 "use client";
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
-import Link from "next/link";
 import { useState } from "react";
 import { HandProfileEditor } from "./hand-profile-editor";
+import type { StudentRow } from "./student-row";
+import { AssignmentLinks } from "./students-plain-table";
 
-export interface StudentRow {
-  membershipId: string;
-  name: string;
-  email: string;
-  spanMm: number | null;
-  octaveMm: number | null;
-  assignments: { id: string; sheetTitle: string; dueDate: string | null }[];
-}
+export type { StudentRow };
 
 const col = createColumnHelper<StudentRow>();
 const columns = [
@@ -24,23 +18,11 @@ const columns = [
   col.accessor((r) => r.assignments.length, {
     id: "assignments",
     header: "Assignments",
-    cell: (c) =>
-      c.row.original.assignments.length === 0 ? (
-        <span className="text-muted">none</span>
-      ) : (
-        <ul className="flex flex-col gap-0.5">
-          {c.row.original.assignments.map((a) => (
-            <li key={a.id}>
-              <Link className="underline" href={`/progress?assignment=${a.id}`}>{a.sheetTitle}</Link>
-              <span className="font-mono text-xs text-muted"> {a.dueDate ? `due ${a.dueDate}` : ""}</span>
-            </li>
-          ))}
-        </ul>
-      ),
+    cell: (c) => <AssignmentLinks row={c.row.original} />,
   }),
 ];
 
-/** The studio's students, sortable by name, e-mail or number of assignments. */
+/** The studio's students, sortable by name, e-mail or number of assignments (loaded after the first paint). */
 export function StudentsTable({ rows }: { rows: StudentRow[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
   const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
