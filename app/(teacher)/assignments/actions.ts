@@ -5,6 +5,7 @@ import type { ActionResult } from "@/lib/action-result";
 import { readEnv } from "@/lib/env";
 import { requireTeacher } from "@/lib/session";
 import { assignSheet } from "./assign-sheet";
+import { assignmentFromForm } from "./assignment-form-data";
 
 /** Assign a sheet: teacher only, the form's schema again on the server, one transaction, then mail. */
 export async function assignSheetAction(raw: unknown): Promise<ActionResult<{ ids: string[] }>> {
@@ -15,4 +16,9 @@ export async function assignSheetAction(raw: unknown): Promise<ActionResult<{ id
     revalidatePath("/students");
   }
   return result;
+}
+
+/** The assign form's action: its fields read into the same input, checked by the same schema. */
+export async function assignSheetFormAction(_previous: ActionResult<{ ids: string[] }> | null, form: FormData): Promise<ActionResult<{ ids: string[] }>> {
+  return assignSheetAction(assignmentFromForm(form));
 }

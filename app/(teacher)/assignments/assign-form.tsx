@@ -1,73 +1,96 @@
 "use client";
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { startTransition, useActionState, useEffect, useRef } from "react";
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
-import { assignSheetAction } from "./actions";
-import { AssignmentInput } from "./assignment-input";
+import { assignSheetFormAction } from "./actions";
+import { tempoGoalName } from "./assignment-form-data";
 
 const inputClass = "rounded-xl border border-line bg-card px-3 py-2 text-base outline-none focus:border-walnut";
-const numberOrUndefined = (v: unknown) => (v === "" || v == null ? undefined : Number(v));
+/** Fields that show their own messages; any other field's message joins the form's message. */
+const SHOWN = ["studentMembershipIds", "dueDate", "tempoGoals", "note"];
 
-/** Assign one sheet to students with a due date and a tempo goal per drill. */
+function FieldError({ messages }: { messages?: string[] }) {
+  return messages?.length ? <p role="alert" className="text-sm text-madder">{messages.join(" ")}</p> : null;
+}
+
+/**
+ * Assign one sheet to students with a due date and a tempo goal per drill. A plain form: the server
+ * action checks it with the assignment schema and answers with a message per field.
+ */
 export function AssignForm({ sheet, students, today }: {
   sheet: { id: string; drills: { id: string; title: string; target: number | null }[] };
   students: { membershipId: string; name: string }[];
   today: string;
 }) {
   const router = useRouter();
-  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
-  const defaults = { sheetId: sheet.id, studentMembershipIds: [], dueDate: today, note: "", tempoGoals: Object.fromEntries(sheet.drills.map((d) => [d.id, d.target ?? undefined])) };
-  const form = useForm<AssignmentInput>({ resolver: zodResolver(AssignmentInput), defaultValues: defaults });
-  const { errors, isSubmitting } = form.formState;
-  async function onSubmit(values: AssignmentInput) {
-    const r = await assignSheetAction(values);
-    if (!r.ok) {
-      setMessage({ ok: false, text: [r.message, ...Object.values(r.fieldErrors ?? {}).flat()].join(" ") });
-      return;
-    }
-    setMessage({ ok: true, text: `Assigned to ${r.data.ids.length} student${r.data.ids.length === 1 ? "" : "s"}; each got an e-mail with the link.` });
-    form.reset(defaults);
+  const formRef = useRef<HTMLFormElement>(null);
+  const [result, submit, pending] = useActionState(assignSheetFormAction, null);
+  const errors = result && !result.ok ? result.fieldErrors ?? {} : {};
+  useEffect(() => {
+    if (!result?.ok) return;
+    formRef.current?.reset();
     router.refresh();
+  }, [result, router]);
+
+  function onSubmit(e: React.FormEvent<HTMLFormElement>) {
+    // Dispatched by hand rather than through `action`, so the fields keep what was typed when the
+    // server refuses it; the form is cleared only after a successful assignment.
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    startTransition(() => submit(form));
   }
-  const tempoMessages = errors.tempoGoals ? Object.values(errors.tempoGoals).map((e) => (e as { message?: string })?.message).filter(Boolean).join(" ") : null;
+
+  const other = Object.entries(errors).filter(([k]) => !SHOWN.includes(k)).flatMap(([, m]) => m);
+  const message = result
+    ? result.ok
+      ? { ok: true, text: `Assigned to ${result.data.ids.length} student${result.data.ids.length === 1 ? "" : "s"}; each got an e-mail with the link.` }
+      : { ok: false, text: [result.message, ...other].join(" ") }
+    : null;
   return (
-    <form onSubmit={form.handleSubmit(onSubmit)} className="flex flex-col gap-4" noValidate aria-label="Assign this sheet">
+    <form ref={formRef} onSubmit={onSubmit} className="flex flex-col gap-4" noValidate aria-label="Assign this sheet">
       {message ? (message.ok ? <p role="status" className="text-sm text-sage">{message.text}</p> : <FormMessage message={message.text} />) : null}
+      <input type="hidden" name="sheetId" value={sheet.id} />
       <fieldset>
         <legend className="text-sm font-bold text-walnut">Students</legend>
         <div className="mt-1 flex flex-wrap gap-2">
           {students.map((s) => (
             <label key={s.membershipId} className="flex items-center gap-1.5 rounded-full border border-line bg-card px-3 py-1.5 text-sm">
-              <input type="checkbox" value={s.membershipId} {...form.register("studentMembershipIds")} /> {s.name}
+              <input type="checkbox" name="studentMembershipIds" value={s.membershipId} /> {s.name}
             </label>
           ))}
         </div>
-        {errors.studentMembershipIds ? <p role="alert" className="text-sm text-madder">{errors.studentMembershipIds.message}</p> : null}
+        <FieldError messages={errors.studentMembershipIds} />
       </fieldset>
       <label className="flex flex-col gap-1 text-sm font-bold text-walnut">
         Due date
-        <input type="date" className={inputClass} aria-invalid={Boolean(errors.dueDate)} {...form.register("dueDate")} />
+        <input type="date" name="dueDate" defaultValue={today} className={inputClass} aria-invalid={Boolean(errors.dueDate)} />
       </label>
-      {errors.dueDate ? <p role="alert" className="text-sm text-madder">{errors.dueDate.message}</p> : null}
+      <FieldError messages={errors.dueDate} />
       <fieldset className="flex flex-col gap-2">
         <legend className="text-sm font-bold text-walnut">Tempo goal per drill (♩ per minute)</legend>
         {sheet.drills.map((d, i) => (
           <label key={d.id} className="flex items-center justify-between gap-3 text-sm">
             <span>{i + 1}. {d.title}</span>
-            <input type="number" inputMode="numeric" className={`${inputClass} w-24`} aria-label={`Tempo goal for ${d.title}`} {...form.register(`tempoGoals.${d.id}`, { setValueAs: numberOrUndefined })} />
+            <input
+              type="number"
+              inputMode="numeric"
+              name={tempoGoalName(d.id)}
+              defaultValue={d.target ?? undefined}
+              className={`${inputClass} w-24`}
+              aria-label={`Tempo goal for ${d.title}`}
+              aria-invalid={Boolean(errors.tempoGoals)}
+            />
           </label>
         ))}
-        {tempoMessages ? <p role="alert" className="text-sm text-madder">{tempoMessages}</p> : null}
+        <FieldError messages={errors.tempoGoals} />
       </fieldset>
       <label className="flex flex-col gap-1 text-sm font-bold text-walnut">
         Note to the students (optional)
-        <textarea rows={2} className={inputClass} {...form.register("note")} />
+        <textarea name="note" rows={2} className={inputClass} />
       </label>
-      {errors.note ? <p role="alert" className="text-sm text-madder">{errors.note.message}</p> : null}
-      <Button type="submit" disabled={isSubmitting}>{isSubmitting ? "Assigning…" : "Assign and e-mail"}</Button>
+      <FieldError messages={errors.note} />
+      <Button type="submit" disabled={pending}>{pending ? "Assigning…" : "Assign and e-mail"}</Button>
     </form>
   );
 }
