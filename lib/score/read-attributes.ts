@@ -4,6 +4,11 @@
  */
 import { atBarStart, position, setDivisions, type Cursor } from "./read-cursor";
 import type { RawScore, AttrState } from "./read-types";
+import {
+  BEAT_TYPE, BEAT_UNIT, BEAT_UNIT_DOT, BEATS, CHROMATIC, CLEF, CLEF_OCTAVE_CHANGE, DIRECTION, DIVISIONS, DYNAMICS,
+  FIFTHS, LINE, MODE, OCTAVE_CHANGE, OCTAVE_SHIFT, OTHER_DYNAMICS, PER_MINUTE, SENZA_MISURA, SIGN, STAFF, STAVES,
+  TRANSPOSE, WORDS,
+} from "./read-names";
 import { warn } from "./read-warnings";
 import { octaveShiftSemitones } from "./pitch";
 import type { AttributeChange, Clef, ClefSign, KeySignature, TimeSignature } from "./types";
@@ -35,28 +40,28 @@ const CLEF_SIGNS = new Set(["G", "F", "C", "percussion", "TAB", "none"]);
 const DEFAULT_LINE: Record<string, number> = { G: 2, F: 4, C: 3 };
 
 /**
- * Handle a closing tag inside `<attributes>`.
+ * Handle a closing tag inside `<attributes>` (`code` and `parent` are element codes from read-names.ts).
  *
  * @example
- * closeAttributesChild(draft, "divisions", "attributes", "4", {}, cursor, raw);
+ * closeAttributesChild(draft, DIVISIONS, ATTRIBUTES, "4", {}, cursor, raw);
  */
 export function closeAttributesChild(
-  a: AttrDraft, name: string, parent: string, value: string, attrs: Record<string, string>, c: Cursor, raw: RawScore,
+  a: AttrDraft, code: number, parent: number, value: string, attrs: Record<string, string>, c: Cursor, raw: RawScore,
 ): void {
-  switch (name) {
-    case "divisions": a.divisions = Number(value); break;
-    case "fifths": a.fifths = Number(value); break;
-    case "mode": a.mode = value; break;
-    case "beats": a.beats.push(value.split("+").reduce((s, x) => s + Number(x), 0)); break;
-    case "beat-type": a.beatTypes.push(Number(value)); break;
-    case "senza-misura":
-      warn(raw, "senza-misura", "Unmeasured time (senza-misura) is read with the previous time signature", c.measureIndex, name);
+  switch (code) {
+    case DIVISIONS: a.divisions = Number(value); break;
+    case FIFTHS: a.fifths = Number(value); break;
+    case MODE: a.mode = value; break;
+    case BEATS: a.beats.push(value.split("+").reduce((s, x) => s + Number(x), 0)); break;
+    case BEAT_TYPE: a.beatTypes.push(Number(value)); break;
+    case SENZA_MISURA:
+      warn(raw, "senza-misura", "Unmeasured time (senza-misura) is read with the previous time signature", c.measureIndex, "senza-misura");
       break;
-    case "staves": a.staves = Number(value); break;
-    case "sign": if (parent === "clef") a.clef.sign = value; break;
-    case "line": if (parent === "clef") a.clef.line = Number(value); break;
-    case "clef-octave-change": a.clef.octave = Number(value); break;
-    case "clef": {
+    case STAVES: a.staves = Number(value); break;
+    case SIGN: if (parent === CLEF) a.clef.sign = value; break;
+    case LINE: if (parent === CLEF) a.clef.line = Number(value); break;
+    case CLEF_OCTAVE_CHANGE: a.clef.octave = Number(value); break;
+    case CLEF: {
       const sign = (CLEF_SIGNS.has(a.clef.sign ?? "") ? a.clef.sign : "none") as ClefSign;
       const staff = Math.max(1, Number(attrs.number ?? 1) || 1);
       a.clefs.push({
@@ -66,8 +71,8 @@ export function closeAttributesChild(
       a.clef = {};
       break;
     }
-    case "chromatic": if (parent === "transpose") a.chromatic = Number(value); break;
-    case "octave-change": if (parent === "transpose") a.octaveChange = Number(value); break;
+    case CHROMATIC: if (parent === TRANSPOSE) a.chromatic = Number(value); break;
+    case OCTAVE_CHANGE: if (parent === TRANSPOSE) a.octaveChange = Number(value); break;
   }
 }
 
@@ -157,25 +162,26 @@ export function newDirectionDraft(_attrs: Record<string, string>): DirectionDraf
 }
 
 /**
- * Handle a closing tag inside `<direction>`.
+ * Handle a closing tag inside `<direction>` (`code` and `parent` are element codes; `name` is needed
+ * only for dynamics, whose element name is the value).
  *
  * @example
- * closeDirectionChild(draft, "words", "direction-type", "slowly", {});
+ * closeDirectionChild(draft, WORDS, OTHER, "words", "slowly", {}); // inside <direction-type>
  */
 export function closeDirectionChild(
-  d: DirectionDraft, name: string, parent: string, value: string, attrs: Record<string, string>,
+  d: DirectionDraft, code: number, parent: number, name: string, value: string, attrs: Record<string, string>,
 ): void {
-  if (parent === "dynamics") {
-    d.dynamic = name === "other-dynamics" ? value : name;
+  if (parent === DYNAMICS) {
+    d.dynamic = code === OTHER_DYNAMICS ? value : name;
     return;
   }
-  switch (name) {
-    case "staff": if (parent === "direction") d.staff = Math.max(1, Number(value) || 1); break;
-    case "words": if (value) d.words.push(value); break;
-    case "octave-shift": d.shift = { type: attrs.type ?? "", size: Number(attrs.size ?? 8) || 8 }; break;
-    case "beat-unit": if (d.beatUnit === undefined) d.beatUnit = value; break;
-    case "beat-unit-dot": d.beatDots += 1; break;
-    case "per-minute": d.perMinute = Number(value); break;
+  switch (code) {
+    case STAFF: if (parent === DIRECTION) d.staff = Math.max(1, Number(value) || 1); break;
+    case WORDS: if (value) d.words.push(value); break;
+    case OCTAVE_SHIFT: d.shift = { type: attrs.type ?? "", size: Number(attrs.size ?? 8) || 8 }; break;
+    case BEAT_UNIT: if (d.beatUnit === undefined) d.beatUnit = value; break;
+    case BEAT_UNIT_DOT: d.beatDots += 1; break;
+    case PER_MINUTE: d.perMinute = Number(value); break;
   }
 }
 

@@ -5,7 +5,12 @@ import type Fraction from "fraction.js";
 import { ScoreError } from "./errors";
 import { makePitch } from "./pitch";
 import { advance, lastOnset, markOnset, position, toTime, type Cursor } from "./read-cursor";
-import { newNoteDraft, type NoteDraft, type RawEvent, type RawScore, type ReadLimits } from "./read-types";
+import {
+  ACCENT, ACTUAL_NOTES, ALTER, CHORD, CUE, DOT, DURATION, DYNAMICS, FERMATA, FINGERING, GRACE, NORMAL_NOTES,
+  NOTE, OCTAVE, OTHER_DYNAMICS, PITCH, REST, STACCATO, STAFF, STEP, TECHNICAL, TENUTO, TIE, TIME_MODIFICATION,
+  TYPE, UNPITCHED, VOICE,
+} from "./read-names";
+import { newNoteDraft, resetNoteDraft, type NoteDraft, type RawEvent, type RawScore, type ReadLimits } from "./read-types";
 import { warn } from "./read-warnings";
 import { ZERO } from "./time";
 import type { NoteMark, Pitch, TieFlag } from "./types";
@@ -23,61 +28,81 @@ export function newNoteState(): NoteState {
 }
 
 /**
- * Handle an opening tag inside `<note>` (flags that are empty elements or carry attributes).
+ * Empty the draft when a new `<note>` opens.
  *
  * @example
- * openNoteChild(draft, "chord", {}); // draft.chord === true
+ * resetNoteState(draft); // draft.chord === false
  */
-export function openNoteChild(n: NoteState, name: string, attrs: Record<string, string>): void {
-  switch (name) {
-    case "chord": n.chord = true; break;
-    case "grace": n.grace = true; break;
-    case "cue": n.cue = true; break;
-    case "rest": n.rest = true; break;
-    case "unpitched": n.unpitched = true; break;
-    case "dot": n.dots += 1; break;
-    case "tie":
+export function resetNoteState(n: NoteState): void {
+  resetNoteDraft(n);
+}
+
+function addMark(n: NoteState, mark: NoteMark): void {
+  if (n.marks === null) n.marks = [mark];
+  else if (!n.marks.includes(mark)) n.marks.push(mark);
+}
+
+/**
+ * Handle an opening tag inside `<note>` (flags that are empty elements or carry attributes), by the
+ * element's code from read-names.ts.
+ *
+ * @example
+ * openNoteChild(draft, CHORD, {}); // draft.chord === true
+ */
+export function openNoteChild(n: NoteState, code: number, attrs: Record<string, string>): void {
+  switch (code) {
+    case CHORD: n.chord = true; break;
+    case GRACE: n.grace = true; break;
+    case CUE: n.cue = true; break;
+    case REST: n.rest = true; break;
+    case UNPITCHED: n.unpitched = true; break;
+    case DOT: n.dots += 1; break;
+    case TIE:
       if (attrs.type === "start") n.tieStart = true;
       else if (attrs.type === "stop") n.tieStop = true;
       break;
-    case "fermata": case "accent": case "staccato": case "tenuto":
-      if (!n.marks.includes(name as NoteMark)) n.marks.push(name as NoteMark);
-      break;
+    case FERMATA: addMark(n, "fermata"); break;
+    case ACCENT: addMark(n, "accent"); break;
+    case STACCATO: addMark(n, "staccato"); break;
+    case TENUTO: addMark(n, "tenuto"); break;
   }
 }
 
 /**
- * Handle a closing tag inside `<note>` whose text carries a value.
+ * Handle a closing tag inside `<note>` whose text carries a value (`code` and `parent` are element
+ * codes; `name` is needed only for dynamics, whose element name is the value).
  *
  * @example
- * closeNoteChild(draft, "step", "pitch", "G", {}, cursor, raw); // draft.step === "G"
+ * closeNoteChild(draft, STEP, PITCH, "step", "G", {}, cursor, raw); // draft.step === "G"
  */
 export function closeNoteChild(
-  n: NoteState, name: string, parent: string, value: string, attrs: Record<string, string>, c: Cursor, raw: RawScore,
+  n: NoteState, code: number, parent: number, name: string, value: string, attrs: Record<string, string>,
+  c: Cursor, raw: RawScore,
 ): void {
-  switch (name) {
-    case "step": if (parent === "pitch") n.step = value; break;
-    case "alter": if (parent === "pitch") n.alter = alterOf(value, c, raw); break;
-    case "octave": if (parent === "pitch") n.octave = Number(value); break;
-    case "duration": if (parent === "note") n.duration = Number(value); break;
-    case "voice": if (parent === "note") n.voice = value || "1"; break;
-    case "staff": if (parent === "note") n.staff = Math.max(1, Math.round(Number(value)) || 1); break;
-    case "type": if (parent === "note") n.type = value; break;
-    case "actual-notes": if (parent === "time-modification") n.actual = Number(value); break;
-    case "normal-notes": if (parent === "time-modification") n.normal = Number(value); break;
-    case "fingering":
-      if (parent === "technical") {
+  switch (code) {
+    case STEP: if (parent === PITCH) n.step = value; break;
+    case ALTER: if (parent === PITCH) n.alter = alterOf(value, c, raw); break;
+    case OCTAVE: if (parent === PITCH) n.octave = Number(value); break;
+    case DURATION: if (parent === NOTE) n.duration = Number(value); break;
+    case VOICE: if (parent === NOTE) n.voice = value || "1"; break;
+    case STAFF: if (parent === NOTE) n.staff = Math.max(1, Math.round(Number(value)) || 1); break;
+    case TYPE: if (parent === NOTE) n.type = value; break;
+    case ACTUAL_NOTES: if (parent === TIME_MODIFICATION) n.actual = Number(value); break;
+    case NORMAL_NOTES: if (parent === TIME_MODIFICATION) n.normal = Number(value); break;
+    case FINGERING:
+      if (parent === TECHNICAL) {
         const finger = Number(value);
         if (Number.isInteger(finger) && finger >= 1 && finger <= 5) {
           const mark: { finger: number; substitution?: boolean; alternate?: boolean } = { finger };
           if (attrs.substitution === "yes") mark.substitution = true;
           if (attrs.alternate === "yes") mark.alternate = true;
-          n.fingering.push(mark);
+          if (n.fingering === null) n.fingering = [mark];
+          else n.fingering.push(mark);
         } else warn(raw, "fingering-text", `Fingering "${value}" is not a finger 1–5 and was left out`, c.measureIndex, "fingering");
       }
       break;
     default:
-      if (parent === "dynamics") n.dynamic = name === "other-dynamics" ? value : name;
+      if (parent === DYNAMICS) n.dynamic = code === OTHER_DYNAMICS ? value : name;
   }
 }
 
@@ -163,11 +188,11 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
     tie,
   };
   if (n.grace) event.grace = true;
-  if (n.fingering.length > 0) {
+  if (n.fingering !== null) {
     event.fingering = n.fingering;
     event.fingeringSource = "score";
   }
-  if (n.marks.length > 0) event.marks = n.marks;
+  if (n.marks !== null) event.marks = n.marks;
   if (dynamic) event.dynamic = dynamic;
   if (words) event.words = words;
   c.part.events.push(event);

@@ -7,41 +7,20 @@ import { SaxesParser } from "saxes";
 import { ScoreError } from "./errors";
 import { ZERO } from "./time";
 import { advance, back, barSoFar, newCursor, startBar, toTime, type Cursor } from "./read-cursor";
-import { closeNoteChild, finishNote, newNoteState, openNoteChild, type NoteState } from "./read-note";
+import { closeNoteChild, finishNote, newNoteState, openNoteChild, resetNoteState } from "./read-note";
 import {
   closeAttributesChild, closeDirectionChild, finishAttributes, finishDirection, newAttrDraft,
   newDirectionDraft, type AttrDraft, type DirectionDraft,
 } from "./read-attributes";
+import {
+  ATTRIBUTES, BACKUP, carriesText, CREATOR, DIRECTION, DURATION, elementCode, ENDING, FORWARD, IDENTIFICATION,
+  MEASURE, MOVEMENT_TITLE, NOTE, PART, PART_NAME, REPEAT, SCORE_PART, SOUND, UNSUPPORTED, WORK_TITLE,
+} from "./read-names";
 import type { RawMeasure, RawScore, ReadLimits } from "./read-types";
 import { warn } from "./read-warnings";
 
-/** Elements that change what sounds and that this reader does not model: each gives a warning. */
-function isUnsupported(name: string): boolean {
-  switch (name) {
-    case "tremolo": case "glissando": case "slide": case "figured-bass": case "harmon-mute": case "multiple-rest":
-      return true;
-    default:
-      return false;
-  }
-}
-
-/**
- * Elements whose text the reader uses. Character data is collected only inside them: saxes then
- * skips building the whitespace strings between the other tags.
- */
-function carriesText(name: string): boolean {
-  switch (name) {
-    case "step": case "alter": case "octave": case "duration": case "voice": case "staff": case "type":
-    case "actual-notes": case "normal-notes": case "fingering": case "other-dynamics":
-    case "divisions": case "fifths": case "mode": case "beats": case "beat-type": case "staves": case "sign":
-    case "line": case "clef-octave-change": case "chromatic": case "octave-change":
-    case "words": case "beat-unit": case "per-minute":
-    case "work-title": case "movement-title": case "creator": case "part-name":
-      return true;
-    default:
-      return false;
-  }
-}
+/** saxes keeps its handlers in fields; setting the text one directly skips `on`/`off`'s name lookup. */
+type TextSlot = { textHandler?: (text: string) => void };
 
 /**
  * Read partwise MusicXML text (already checked by `assertSafeXml`) into the raw model.
@@ -53,14 +32,18 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   const raw: RawScore = {
     title: "", movementTitle: "", composer: "", partNames: new Map(), partOrder: [], parts: new Map(), warnings: [],
   };
-  // The open elements: names, attributes and whether their text is collected, one slot per depth.
+  // The open elements: names, codes (read-names.ts), attributes and whether their text is collected,
+  // one slot per depth.
   const names: string[] = [];
+  const codes: number[] = [];
   const attrStack: Record<string, string>[] = [];
   const textStack: boolean[] = [];
   let depth = 0;
   let chars = "";
   let cursor: Cursor | null = null;
-  let note: NoteState | null = null;
+  // One note draft serves the whole file; `inNote` says whether a <note> is open.
+  const note = newNoteState();
+  let inNote = false;
   let attr: AttrDraft | null = null;
   let dir: DirectionDraft | null = null;
   let rootSeen = false;
@@ -68,15 +51,9 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   const counter = { notes: 0 };
 
   const parser = new SaxesParser({ position: false });
+  const slot = parser as unknown as TextSlot;
   const onText = (t: string) => {
     chars += t;
-  };
-  let collecting = false;
-  const collect = (on: boolean) => {
-    if (on === collecting) return;
-    collecting = on;
-    if (on) parser.on("text", onText);
-    else parser.off("text");
   };
   parser.on("opentag", (tag) => {
     const name = tag.name;
@@ -90,18 +67,20 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         throw new ScoreError("not-musicxml", `The root element is <${name}>, not <score-partwise>`, { element: name });
       }
     }
+    const code = elementCode(name);
     names[depth] = name;
+    codes[depth] = code;
     attrStack[depth] = attrs;
-    const text = carriesText(name);
+    const text = carriesText(code);
     textStack[depth] = text;
     depth += 1;
     chars = "";
-    collect(text);
-    switch (name) {
-      case "score-part":
+    slot.textHandler = text ? onText : undefined;
+    switch (code) {
+      case SCORE_PART:
         scorePartId = attrs.id ?? "";
         break;
-      case "part": {
+      case PART: {
         const id = attrs.id ?? `P${raw.partOrder.length + 1}`;
         if (!raw.partNames.has(id)) warn(raw, "part-not-listed", `Part ${id} is not in the part list`, undefined, "part");
         const part = { id, staves: 1, measures: [], events: [] };
@@ -110,22 +89,25 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
         cursor = newCursor(part);
         break;
       }
-      case "measure":
+      case MEASURE:
         if (cursor) openMeasure(cursor, attrs, limits);
         break;
-      case "note":
-        if (cursor) note = newNoteState();
+      case NOTE:
+        if (cursor) {
+          resetNoteState(note);
+          inNote = true;
+        }
         break;
-      case "attributes":
+      case ATTRIBUTES:
         attr = newAttrDraft();
         break;
-      case "direction":
+      case DIRECTION:
         dir = newDirectionDraft(attrs);
         break;
-      case "sound":
+      case SOUND:
         if (cursor?.measure && attrs.tempo !== undefined) setTempo(cursor.measure, Number(attrs.tempo), true);
         break;
-      case "repeat":
+      case REPEAT:
         if (cursor?.measure) {
           const r = cursor.measure.repeat ?? {};
           cursor.measure.repeat = attrs.direction === "backward"
@@ -133,17 +115,17 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
             : { ...r, forward: true };
         }
         break;
-      case "ending":
+      case ENDING:
         if (cursor?.measure) {
           const type = attrs.type === "start" || attrs.type === "stop" ? attrs.type : "discontinue";
           cursor.measure.repeat = { ...cursor.measure.repeat, ending: { number: attrs.number ?? "", type } };
         }
         break;
+      case UNSUPPORTED:
+        if (cursor) warn(raw, "unsupported", `<${name}> is not modelled and was left out`, cursor.measureIndex, name);
+        break;
       default:
-        if (note) openNoteChild(note, name, attrs);
-        if (cursor && isUnsupported(name)) {
-          warn(raw, "unsupported", `<${name}> is not modelled and was left out`, cursor.measureIndex, name);
-        }
+        if (inNote) openNoteChild(note, code, attrs);
     }
   });
 
@@ -152,62 +134,62 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   parser.on("closetag", () => {
     if (depth === 0) return;
     depth -= 1;
-    const name = names[depth];
+    const code = codes[depth];
     const attrs = attrStack[depth];
-    const parent = depth > 0 ? names[depth - 1] : "";
+    const parent = depth > 0 ? codes[depth - 1] : -1;
     const value = chars.length === 0 ? "" : chars.trim();
     chars = "";
     // Text after a child element belongs to the parent again.
-    collect(depth > 0 && textStack[depth - 1]);
+    slot.textHandler = depth > 0 && textStack[depth - 1] ? onText : undefined;
     const c = cursor as Cursor | null;
-    if (note && c) {
-      if (name === "note") {
+    if (inNote && c) {
+      if (code === NOTE) {
         finishNote(note, c, raw, counter, limits);
-        note = null;
-      } else closeNoteChild(note, name, parent, value, attrs, c, raw);
+        inNote = false;
+      } else closeNoteChild(note, code, parent, names[depth], value, attrs, c, raw);
       return;
     }
     if (attr && c) {
-      if (name === "attributes") {
+      if (code === ATTRIBUTES) {
         finishAttributes(attr, c, raw);
         attr = null;
-      } else closeAttributesChild(attr, name, parent, value, attrs, c, raw);
+      } else closeAttributesChild(attr, code, parent, value, attrs, c, raw);
       return;
     }
     if (dir && c) {
-      if (name === "direction") {
+      if (code === DIRECTION) {
         const tempo = finishDirection(dir, c);
         if (tempo !== undefined && c.measure) setTempo(c.measure, tempo, false);
         dir = null;
-      } else closeDirectionChild(dir, name, parent, value, attrs);
+      } else closeDirectionChild(dir, code, parent, names[depth], value, attrs);
       return;
     }
-    switch (name) {
-      case "work-title":
+    switch (code) {
+      case WORK_TITLE:
         raw.title = value;
         break;
-      case "movement-title":
+      case MOVEMENT_TITLE:
         raw.movementTitle = value;
         break;
-      case "creator":
-        if (parent === "identification" && attrs.type === "composer" && !raw.composer) raw.composer = value;
+      case CREATOR:
+        if (parent === IDENTIFICATION && attrs.type === "composer" && !raw.composer) raw.composer = value;
         break;
-      case "part-name":
-        if (parent === "score-part" && scorePartId) raw.partNames.set(scorePartId, value);
+      case PART_NAME:
+        if (parent === SCORE_PART && scorePartId) raw.partNames.set(scorePartId, value);
         break;
-      case "score-part":
+      case SCORE_PART:
         if (scorePartId && !raw.partNames.has(scorePartId)) raw.partNames.set(scorePartId, "");
         break;
-      case "duration":
-        if (c && (parent === "backup" || parent === "forward")) moveCursor(c, parent, Number(value), raw);
+      case DURATION:
+        if (c && (parent === BACKUP || parent === FORWARD)) moveCursor(c, parent === BACKUP ? "backup" : "forward", Number(value), raw);
         break;
-      case "measure":
+      case MEASURE:
         if (c?.measure) {
           c.measure.length = barSoFar(c);
           c.measure = null;
         }
         break;
-      case "part":
+      case PART:
         cursor = null;
         break;
     }

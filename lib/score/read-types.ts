@@ -85,9 +85,11 @@ export interface NoteDraft {
   normal: number;
   tieStart: boolean;
   tieStop: boolean;
-  fingering: Fingering[];
-  marks: NoteMark[];
-  dynamic?: string;
+  /** Null until the note has a fingering (most have none). */
+  fingering: Fingering[] | null;
+  /** Null until the note has a mark. */
+  marks: NoteMark[] | null;
+  dynamic: string | undefined;
 }
 
 /**
@@ -100,6 +102,20 @@ export function newNoteDraft(): NoteDraft {
   return {
     chord: false, grace: false, cue: false, rest: false, unpitched: false, step: "", alter: 0, octave: 4,
     duration: null, voice: "1", staff: 1, type: null, dots: 0, actual: 0, normal: 0, tieStart: false,
-    tieStop: false, fingering: [], marks: [],
+    tieStop: false, fingering: null, marks: null, dynamic: undefined,
   };
+}
+
+/**
+ * Empty a draft for the next `<note>`, so one draft serves a whole file. Arrays handed to an event
+ * are dropped, never cleared.
+ *
+ * @example
+ * resetNoteDraft(draft); // draft.voice === "1"
+ */
+export function resetNoteDraft(n: NoteDraft): void {
+  n.chord = false; n.grace = false; n.cue = false; n.rest = false; n.unpitched = false;
+  n.step = ""; n.alter = 0; n.octave = 4; n.duration = null; n.voice = "1"; n.staff = 1; n.type = null;
+  n.dots = 0; n.actual = 0; n.normal = 0; n.tieStart = false; n.tieStop = false;
+  n.fingering = null; n.marks = null; n.dynamic = undefined;
 }
