@@ -1,7 +1,7 @@
-import { asc, count, desc, eq } from "drizzle-orm";
+import { and, asc, count, desc, eq } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
-import { sheet, sheetDrill, type SheetDrillMeta } from "../schema";
+import { passage, score, sheet, sheetDrill, type SheetDrillMeta } from "../schema";
 
 /** The studio's drill sheets with how many drills each holds. */
 export async function listSheets(database: Db, studioId: string) {
@@ -78,4 +78,48 @@ export async function getSheetDrill(database: Db, drillId: string) {
     .where(eq(sheetDrill.id, drillId))
     .limit(1);
   return row ? { ...row.drill, studioId: row.studioId } : null;
+}
+
+/**
+ * A sheet of the studio for its JSON view: the sheet, its knot and piece (null when the knot is
+ * gone), and its drills in order; the drills' MusicXML only when asked for. Null when the sheet is
+ * not this studio's.
+ */
+export async function getSheetOverview(database: Db, studioId: string, sheetId: string, opts: { musicxml: boolean }) {
+  const [head] = await database
+    .select({
+      id: sheet.id,
+      title: sheet.title,
+      notes: sheet.notes,
+      createdAt: sheet.createdAt,
+      updatedAt: sheet.updatedAt,
+      knotId: passage.id,
+      part: passage.part,
+      hand: passage.hand,
+      fromBar: passage.fromBar,
+      toBar: passage.toBar,
+      pieceId: score.id,
+      pieceTitle: score.title,
+      composer: score.composer,
+    })
+    .from(sheet)
+    .leftJoin(passage, and(eq(passage.id, sheet.passageId), eq(passage.studioId, studioId)))
+    .leftJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .where(inStudio(sheet, studioId, eq(sheet.id, sheetId)))
+    .limit(1);
+  if (!head) return null;
+  const columns = {
+    id: sheetDrill.id,
+    position: sheetDrill.position,
+    family: sheetDrill.family,
+    variant: sheetDrill.variant,
+    title: sheetDrill.title,
+    teacherNote: sheetDrill.teacherNote,
+    studentNote: sheetDrill.studentNote,
+    meta: sheetDrill.meta,
+  };
+  const drills = opts.musicxml
+    ? await database.select({ ...columns, musicxml: sheetDrill.musicxml }).from(sheetDrill).where(eq(sheetDrill.sheetId, head.id)).orderBy(asc(sheetDrill.position))
+    : await database.select(columns).from(sheetDrill).where(eq(sheetDrill.sheetId, head.id)).orderBy(asc(sheetDrill.position));
+  return { ...head, drills: drills as ((typeof drills)[number] & { musicxml?: string })[] };
 }
