@@ -12,6 +12,7 @@ import Fraction from "fraction.js";
 import { ScoreError } from "./errors";
 import { fromDivisions, maxTime, ZERO } from "./time";
 import type { AttrState, RawMeasure, RawPart } from "./read-types";
+import type { Pitch, Written } from "./types";
 
 /** Finest tick the integer cursor uses (ticks per quarter note). */
 export const MAX_UNIT = 2 ** 30;
@@ -48,6 +49,10 @@ export interface Cursor {
   /** Tick count → quarter notes at `cacheUnit`. */
   readonly offsets: Map<number, Fraction>;
   cacheUnit: number;
+  /** Pitches already made in this part, shared by the events that sound them (the model is readonly). */
+  readonly pitches: Map<number, Pitch>;
+  /** Written forms without a tuplet already made in this part: note type → by number of dots. */
+  readonly writtens: Map<string | null, Written[]>;
 }
 
 /**
@@ -63,6 +68,7 @@ export function newCursor(part: RawPart): Cursor {
     state: { key: { fifths: 0, mode: "major" }, time: { beats: 4, beatType: 4 }, clefs: [] },
     measure: null, measureIndex: -1, shift: new Map(), transpose: 0,
     pendingDynamic: new Map(), pendingWords: new Map(), durations: new Map(), offsets: new Map(), cacheUnit: 1,
+    pitches: new Map(), writtens: new Map(),
   };
 }
 

@@ -13,7 +13,7 @@ import {
 import { newNoteDraft, resetNoteDraft, type NoteDraft, type RawEvent, type RawScore, type ReadLimits } from "./read-types";
 import { warn } from "./read-warnings";
 import { ZERO } from "./time";
-import type { NoteMark, Pitch, TieFlag } from "./types";
+import type { NoteMark, Pitch, TieFlag, Written } from "./types";
 
 export type NoteState = NoteDraft;
 
@@ -121,6 +121,36 @@ function isStepLetter(s: string): s is Pitch["step"] {
 }
 
 /**
+ * The pitch of a note, shared with earlier notes of the part that have the same step, alteration,
+ * octave and transposition (only small integer values, and never -0, are shared).
+ */
+function pitchOf(c: Cursor, step: Pitch["step"], alter: number, octave: number): Pitch {
+  const t = c.transpose;
+  if (
+    !Number.isInteger(octave) || octave < -10 || octave > 20 || alter < -8 || alter > 8 || t < -48 || t > 48
+    || Object.is(alter, -0) || Object.is(octave, -0)
+  ) return makePitch(step, alter, octave, t);
+  const key = (((octave + 10) * 7 + step.charCodeAt(0) - 65) * 17 + alter + 8) * 97 + t + 48;
+  let pitch = c.pitches.get(key);
+  if (pitch === undefined) {
+    pitch = makePitch(step, alter, octave, t);
+    c.pitches.set(key, pitch);
+  }
+  return pitch;
+}
+
+/** The written form of a note without a tuplet, shared within the part. */
+function plainWritten(c: Cursor, type: string | null, dots: number): Written {
+  if (dots > 8) return { type, dots, tuplet: null };
+  let byDots = c.writtens.get(type);
+  if (byDots === undefined) {
+    byDots = [];
+    c.writtens.set(type, byDots);
+  }
+  return (byDots[dots] ??= { type, dots, tuplet: null });
+}
+
+/**
  * Place a finished note in time, move the cursor and store the event.
  *
  * @example
@@ -162,7 +192,7 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
   if (!n.rest && !n.unpitched) {
     if (isStepLetter(n.step) && Number.isFinite(n.octave)) {
       // <octave-shift> lines change only the display: MusicXML's <pitch> data is already the true pitch.
-      pitch = makePitch(n.step, n.alter, n.octave, c.transpose);
+      pitch = pitchOf(c, n.step, n.alter, n.octave);
     } else warn(raw, "bad-pitch", `A note has no readable <pitch>; read as a rest`, c.measureIndex, "pitch");
   } else if (n.unpitched) warn(raw, "unpitched", "Unpitched notes are read as rests", c.measureIndex, "unpitched");
   let dynamic = n.dynamic;
@@ -182,7 +212,9 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
     measure: c.measureIndex,
     onset: offset,
     duration,
-    written: { type: n.type, dots: n.dots, tuplet: n.actual > 0 && n.normal > 0 && n.actual !== n.normal ? { actual: n.actual, normal: n.normal } : null },
+    written: n.actual > 0 && n.normal > 0 && n.actual !== n.normal
+      ? { type: n.type, dots: n.dots, tuplet: { actual: n.actual, normal: n.normal } }
+      : plainWritten(c, n.type, n.dots),
     pitch,
     chord: n.chord,
     tie,
