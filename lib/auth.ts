@@ -5,6 +5,7 @@ import { db } from "../db";
 import * as schema from "../db/schema";
 import { authSecret, readEnv } from "./env";
 import { resetPasswordMail, sendMail } from "./mail";
+import { signInLimitHooks } from "./sign-in-limit";
 
 const env = readEnv();
 
@@ -54,6 +55,8 @@ export const auth = betterAuth({
       "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: 10 },
     },
   },
+  // Per-account limit on failed sign-ins, whatever address the client claims (lib/sign-in-limit.ts).
+  hooks: signInLimitHooks,
   session: {
     expiresIn: 60 * 60 * 24 * 14,
     updateAge: 60 * 60 * 24,

@@ -100,4 +100,25 @@ describe("sign-in rate limiting", () => {
     });
     expect(right.status).toBe(429);
   });
+
+  test("changing X-Forwarded-For on every try does not help: the 11th wrong password for one account is 429", async () => {
+    // Addresses from TEST-NET-3 (RFC 5737), a new one per try, so no per-address budget is ever used up.
+    const statuses: number[] = [];
+    for (let i = 0; i < 11; i++) {
+      const res = await fetch(`${baseURL}/api/auth/sign-in/email`, {
+        method: "POST",
+        headers: { "content-type": "application/json", origin: baseURL, "x-forwarded-for": `203.0.113.${i + 1}` },
+        body: JSON.stringify({ email: PERSONA_LOGINS.otherStudent.email, password: `rotating-guess-${i}` }),
+      });
+      statuses.push(res.status);
+    }
+    expect(statuses.slice(0, 10)).toEqual(Array(10).fill(401));
+    expect(statuses[10]).toBe(429);
+    const right = await fetch(`${baseURL}/api/auth/sign-in/email`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: baseURL, "x-forwarded-for": "203.0.113.99" },
+      body: JSON.stringify(PERSONA_LOGINS.otherStudent),
+    });
+    expect(right.status).toBe(429);
+  });
 });
