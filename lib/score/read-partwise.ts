@@ -17,18 +17,20 @@ import {
   MEASURE, MOVEMENT_TITLE, NOTE, PART, PART_NAME, REPEAT, SCORE_PART, SOUND, UNSUPPORTED, WORK_TITLE,
 } from "./read-names";
 import type { RawMeasure, RawScore, ReadLimits } from "./read-types";
+import type { XmlCleaner } from "./sanitize";
 import { warn } from "./read-warnings";
 
 /** saxes keeps its handlers in fields; setting the text one directly skips `on`/`off`'s name lookup. */
 type TextSlot = { textHandler?: (text: string) => void };
 
 /**
- * Read partwise MusicXML text (already checked by `assertSafeXml`) into the raw model.
+ * Read partwise MusicXML text (already checked by `assertSafeXml`) into the raw model. A `cleaner`
+ * (sanitize.ts) is fed from the same pass, so the cleaned copy costs no second parse.
  *
  * @example
  * parsePartwise('<score-partwise>…</score-partwise>', DEFAULT_LIMITS).parts.get("P1");
  */
-export function parsePartwise(text: string, limits: ReadLimits): RawScore {
+export function parsePartwise(text: string, limits: ReadLimits, cleaner?: XmlCleaner): RawScore {
   const raw: RawScore = {
     title: "", movementTitle: "", composer: "", partNames: new Map(), partOrder: [], parts: new Map(), warnings: [],
   };
@@ -55,7 +57,21 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
   const onText = (t: string) => {
     chars += t;
   };
+  // What the text handler is while an element's text is collected, and while it is not. With a
+  // cleaner every piece of text goes to it, so the handler stays set and only collection switches.
+  let collecting = false;
+  let textOn: ((t: string) => void) | undefined = onText;
+  let textOff: ((t: string) => void) | undefined;
+  if (cleaner) {
+    textOn = (t) => {
+      cleaner.text(t);
+      if (collecting) chars += t;
+    };
+    textOff = textOn;
+    slot.textHandler = textOn;
+  }
   parser.on("opentag", (tag) => {
+    if (cleaner) cleaner.openTag(tag);
     const name = tag.name;
     const attrs = tag.attributes as Record<string, string>;
     if (!rootSeen) {
@@ -75,7 +91,8 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
     textStack[depth] = text;
     depth += 1;
     chars = "";
-    slot.textHandler = text ? onText : undefined;
+    collecting = text;
+    slot.textHandler = text ? textOn : textOff;
     switch (code) {
       case SCORE_PART:
         scorePartId = attrs.id ?? "";
@@ -129,9 +146,13 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
     }
   });
 
-  parser.on("cdata", onText);
+  parser.on("cdata", cleaner ? (t) => {
+    cleaner.cdata(t);
+    chars += t;
+  } : onText);
 
-  parser.on("closetag", () => {
+  parser.on("closetag", (tag) => {
+    if (cleaner) cleaner.closeTag(tag);
     if (depth === 0) return;
     depth -= 1;
     const code = codes[depth];
@@ -140,7 +161,8 @@ export function parsePartwise(text: string, limits: ReadLimits): RawScore {
     const value = chars.length === 0 ? "" : chars.trim();
     chars = "";
     // Text after a child element belongs to the parent again.
-    slot.textHandler = depth > 0 && textStack[depth - 1] ? onText : undefined;
+    collecting = depth > 0 && textStack[depth - 1];
+    slot.textHandler = collecting ? textOn : textOff;
     const c = cursor as Cursor | null;
     if (inNote && c) {
       if (code === NOTE) {

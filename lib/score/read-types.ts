@@ -19,6 +19,8 @@ export interface ReadOptions {
   readonly maxMeasures?: number;
   /** Most notes in the whole file (default 200,000). */
   readonly maxNotes?: number;
+  /** Also return the cleaned copy (`sanitizeScore`'s text), made in the same pass. */
+  readonly clean?: boolean;
 }
 
 export const DEFAULT_LIMITS: ReadLimits = { maxMeasures: 5000, maxNotes: 200_000 };

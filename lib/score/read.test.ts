@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { Note } from "tonal";
 import { describe, expect, test } from "vitest";
-import { readScore } from "./read";
+import { readScore, sanitizeScore } from "./read";
 import { mergeTies } from "./ties";
 
 const fixture = (name: string) =>
@@ -148,5 +148,36 @@ describe("readScore — input forms", () => {
   test("an unsupported element gives a warning naming bar and element", () => {
     const { warnings } = readScore(bar("<divisions>1</divisions>", note("C", 4, 4, "<notations><ornaments><tremolo>3</tremolo></ornaments></notations>")));
     expect(warnings).toContainEqual(expect.objectContaining({ code: "unsupported", element: "tremolo", measure: 0 }));
+  });
+});
+
+describe("readScore — the cleaned copy from the reading pass", () => {
+  test("{ clean: true } gives sanitizeScore's text and the same score and warnings", () => {
+    // A file with a DOCTYPE, from the MusicXML test suite (lilypond-testsuite, MIT).
+    const file = path.join(referenceDir, "musicxml/lilypond-testsuite/01a-Pitches-Pitches.xml");
+    const bytes = new Uint8Array(fs.readFileSync(file));
+    const both = readScore(bytes, { clean: true });
+    const plain = readScore(bytes);
+    expect(both.cleaned).toBe(sanitizeScore(bytes));
+    expect(both.cleaned).not.toContain("<!DOCTYPE");
+    expect(both.score.events.map((e) => [e.pitch?.midi, e.onset.toFraction()])).toEqual(
+      plain.score.events.map((e) => [e.pitch?.midi, e.onset.toFraction()]),
+    );
+    expect(both.warnings).toEqual(plain.warnings);
+    // Reading the stored copy gives the same notes as reading the upload.
+    expect(readScore(both.cleaned).score.events.length).toBe(plain.score.events.length);
+  });
+
+  test("a comment, a processing instruction and CDATA are dropped or escaped, the notes kept", () => {
+    const xml = bar("<divisions>1</divisions>", `<!-- a --><?pi x?>${note("C", 4, 1)}`).replace(
+      "<part-name>P</part-name>",
+      "<part-name><![CDATA[R&H]]></part-name>",
+    );
+    const { cleaned, score } = readScore(xml, { clean: true });
+    expect(cleaned).not.toContain("<!--");
+    expect(cleaned).not.toContain("<?pi");
+    expect(cleaned).toContain("<part-name>R&amp;H</part-name>");
+    expect(score.parts[0].name).toBe("R&H");
+    expect(score.events[0].pitch?.midi).toBe(60); // FACTS.md §1: C4 = MIDI 60
   });
 });

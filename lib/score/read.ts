@@ -6,7 +6,7 @@ import { isZip, unpackMxl } from "./mxl";
 import { buildScore } from "./read-build";
 import { parsePartwise } from "./read-partwise";
 import { DEFAULT_LIMITS, type ReadOptions } from "./read-types";
-import { assertSafeXml, cleanXml } from "./sanitize";
+import { assertSafeXml, xmlCleaner } from "./sanitize";
 import type { Score, ScoreWarning } from "./types";
 
 export type { ReadOptions } from "./read-types";
@@ -17,27 +17,39 @@ export interface ReadResult {
   readonly warnings: ScoreWarning[];
 }
 
+/** What `readScore(input, { clean: true })` returns: also the cleaned copy, made in the same pass. */
+export interface CleanReadResult extends ReadResult {
+  /** Exactly what `sanitizeScore(input)` returns. */
+  readonly cleaned: string;
+}
+
 /**
  * Read partwise MusicXML (text or bytes, zipped .mxl detected by content) into a `Score`.
- * Throws `ScoreError` only when the file cannot be used; oddities become warnings.
+ * Throws `ScoreError` only when the file cannot be used; oddities become warnings. With
+ * `{ clean: true }` it also returns the cleaned copy (`sanitizeScore`'s text) from the same pass.
  *
  * @example
  * const { score, warnings } = readScore(xmlText);
  * score.events[0].onset.toFraction(); // "0"
+ * const { cleaned } = readScore(uploadBytes, { clean: true }); // what gets stored
  */
-export function readScore(input: string | Uint8Array, options: ReadOptions = {}): ReadResult {
+export function readScore(input: string | Uint8Array, options: ReadOptions & { clean: true }): CleanReadResult;
+export function readScore(input: string | Uint8Array, options?: ReadOptions): ReadResult;
+export function readScore(input: string | Uint8Array, options: ReadOptions = {}): ReadResult | CleanReadResult {
   const text = scoreText(input);
   assertSafeXml(text);
   const limits = { ...DEFAULT_LIMITS, ...options };
-  const raw = parsePartwise(text, limits);
+  const cleaner = options.clean ? xmlCleaner() : undefined;
+  const raw = parsePartwise(text, limits, cleaner);
   const score = buildScore(raw);
-  return { score, warnings: raw.warnings };
+  return cleaner ? { score, warnings: raw.warnings, cleaned: cleaner.result() } : { score, warnings: raw.warnings };
 }
 
 /**
  * The cleaned MusicXML text of an upload — the only copy ever stored or sent to a browser. The file is
- * first read in full (so hostile or unusable files throw the same `ScoreError`s as `readScore`), then
- * re-serialised without DOCTYPE, comments and processing instructions, entities decoded.
+ * read in full (so hostile or unusable files throw the same `ScoreError`s as `readScore`) and, in the
+ * same pass, re-serialised without DOCTYPE, comments and processing instructions, entities decoded.
+ * When the `Score` is needed too, `readScore(input, { clean: true })` gives both at once.
  *
  * @example
  * sanitizeScore(mxlBytes).startsWith('<?xml version="1.0" encoding="UTF-8"?>'); // true
@@ -45,8 +57,9 @@ export function readScore(input: string | Uint8Array, options: ReadOptions = {})
 export function sanitizeScore(input: string | Uint8Array, options: ReadOptions = {}): string {
   const text = scoreText(input);
   assertSafeXml(text);
-  parsePartwise(text, { ...DEFAULT_LIMITS, ...options });
-  return cleanXml(text);
+  const cleaner = xmlCleaner();
+  parsePartwise(text, { ...DEFAULT_LIMITS, ...options }, cleaner);
+  return cleaner.result();
 }
 
 /**

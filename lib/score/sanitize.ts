@@ -77,6 +77,63 @@ export function escapeXml(s: string): string {
   return s.replace(/[&<>"]/g, (c) => ESCAPES[c]);
 }
 
+/** The saxes events a cleaner listens to; the reader forwards them from its own pass. */
+export interface XmlCleaner {
+  openTag(tag: { readonly name: string; readonly attributes: Record<string, unknown>; readonly isSelfClosing: boolean }): void;
+  closeTag(tag: { readonly name: string; readonly isSelfClosing: boolean }): void;
+  /** Character data (the `text` event). */
+  text(t: string): void;
+  cdata(t: string): void;
+  /** The cleaned document so far. */
+  result(): string;
+}
+
+/**
+ * A serialiser fed with saxes events: elements, attributes and text (entities decoded and re-escaped);
+ * no DOCTYPE, comments or processing instructions; CDATA as escaped text; text before the root dropped.
+ * `cleanXml` drives it with its own saxes pass; `readScore({ clean: true })` from the reading pass.
+ *
+ * @example
+ * const cleaner = xmlCleaner();
+ * cleaner.openTag({ name: "a", attributes: {}, isSelfClosing: true });
+ * cleaner.closeTag({ name: "a", isSelfClosing: true });
+ * cleaner.result(); // '<?xml version="1.0" encoding="UTF-8"?>\n<a/>'
+ */
+export function xmlCleaner(): XmlCleaner {
+  const out: string[] = ['<?xml version="1.0" encoding="UTF-8"?>\n'];
+  let open: string | null = null;
+  const flush = () => {
+    if (open !== null) out.push(open, ">");
+    open = null;
+  };
+  const onText = (t: string) => {
+    if (t.length === 0) return;
+    flush();
+    out.push(escapeXml(t));
+  };
+  return {
+    openTag(tag) {
+      flush();
+      let s = `<${tag.name}`;
+      for (const [k, v] of Object.entries(tag.attributes)) s += ` ${k}="${escapeXml(String(v))}"`;
+      if (tag.isSelfClosing) out.push(s, "/>");
+      else open = s;
+    },
+    closeTag(tag) {
+      if (tag.isSelfClosing) return;
+      if (open !== null) {
+        out.push(open, "/>");
+        open = null;
+      } else out.push(`</${tag.name}>`);
+    },
+    text(t) {
+      if (out.length > 1) onText(t);
+    },
+    cdata: onText,
+    result: () => out.join(""),
+  };
+}
+
 /**
  * Re-serialise safe MusicXML text: keeps elements, attributes and text (entities decoded and re-escaped),
  * drops the DOCTYPE, comments and processing instructions, turns CDATA into escaped text.
@@ -86,40 +143,16 @@ export function escapeXml(s: string): string {
  */
 export function cleanXml(text: string): string {
   assertSafeXml(text);
-  const out: string[] = ['<?xml version="1.0" encoding="UTF-8"?>\n'];
+  const cleaner = xmlCleaner();
   const parser = new SaxesParser({ position: false });
-  let open: string | null = null;
-  const flush = () => {
-    if (open !== null) out.push(open, ">");
-    open = null;
-  };
-  parser.on("opentag", (tag) => {
-    flush();
-    let s = `<${tag.name}`;
-    for (const [k, v] of Object.entries(tag.attributes)) s += ` ${k}="${escapeXml(String(v))}"`;
-    if (tag.isSelfClosing) out.push(s, "/>");
-    else open = s;
-  });
-  parser.on("closetag", (tag) => {
-    if (tag.isSelfClosing) return;
-    if (open !== null) {
-      out.push(open, "/>");
-      open = null;
-    } else out.push(`</${tag.name}>`);
-  });
-  const onText = (t: string) => {
-    if (t.length === 0) return;
-    flush();
-    out.push(escapeXml(t));
-  };
-  parser.on("text", (t) => {
-    if (out.length > 1) onText(t);
-  });
-  parser.on("cdata", onText);
+  parser.on("opentag", (tag) => cleaner.openTag(tag));
+  parser.on("closetag", (tag) => cleaner.closeTag(tag));
+  parser.on("text", (t) => cleaner.text(t));
+  parser.on("cdata", (t) => cleaner.cdata(t));
   try {
     parser.write(text).close();
   } catch (e) {
     throw new ScoreError("xml-malformed", `The XML is not well formed: ${(e as Error).message}`);
   }
-  return out.join("");
+  return cleaner.result();
 }

@@ -5,7 +5,7 @@
 import type { Db } from "@/db";
 import { deleteScore, insertScore } from "@/db/queries/scores";
 import type { FileStore } from "@/lib/storage";
-import { isScoreError, readScore, sanitizeScore } from "@/lib/score";
+import { isScoreError, readScore } from "@/lib/score";
 
 /** The size cap shown on the form and enforced here. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
@@ -86,8 +86,9 @@ export async function acceptUpload(form: FormData, ctx: UploadContext): Promise<
   let cleaned: string;
   let summary: { title: string; composer: string | null; bars: number; parts: { id: string; name: string; staves: number }[]; warnings: number };
   try {
-    cleaned = sanitizeScore(bytes);
-    const { score, warnings } = readScore(cleaned);
+    const read = readScore(bytes, { clean: true });
+    cleaned = read.cleaned;
+    const { score, warnings } = read;
     if (score.measures.length === 0 || score.parts.length === 0) {
       return refuse(422, `"${file.name}" has no bars of music.`);
     }
