@@ -22,10 +22,17 @@ export function PracticeForm({ assignmentId, drills, today }: { assignmentId: st
   const [message, setMessage] = useState<string | null>(null);
   const [serverErrors, setServerErrors] = useState<Record<string, string[]>>({});
   const [saved, setSaved] = useState(false);
-  const form = useForm<PracticeEntryInput>({
-    resolver: zodResolver(PracticeEntryInput),
-    defaultValues: { assignmentId, practisedOn: today, minutes: 15, ease: 3, comment: "", tempos: {} },
+  const [round, setRound] = useState(0);
+  // Every drill's tempo field named in the defaults, so a reset after saving empties each box.
+  const blank = (): PracticeEntryInput => ({
+    assignmentId,
+    practisedOn: today,
+    minutes: 15,
+    ease: 3,
+    comment: "",
+    tempos: Object.fromEntries(drills.map((d) => [d.id, undefined])),
   });
+  const form = useForm<PracticeEntryInput>({ resolver: zodResolver(PracticeEntryInput), defaultValues: blank() });
   const { errors, isSubmitting } = form.formState;
   // radios keep a number in the form state (register's setValueAs applies to text inputs only)
   const ease = form.watch("ease");
@@ -43,14 +50,16 @@ export function PracticeForm({ assignmentId, drills, today }: { assignmentId: st
     }
     setServerErrors({});
     setSaved(true);
-    form.reset({ assignmentId, practisedOn: today, minutes: 15, ease: 3, comment: "", tempos: {} });
+    form.reset(blank());
+    // fresh inputs: a re-registered number box would otherwise read its old value back into the form
+    setRound((r) => r + 1);
     router.refresh();
   }
 
   const temposError = errors.tempos ? Object.values(errors.tempos).map((e) => (e as { message?: string })?.message).filter(Boolean).join(" ") : serverErrors.tempos?.join(" ");
 
   return (
-    <form onSubmit={form.handleSubmit(onSubmit)} className="flex flex-col gap-4" noValidate aria-label="Log practice">
+    <form key={round} onSubmit={form.handleSubmit(onSubmit)} className="flex flex-col gap-4" noValidate aria-label="Log practice">
       <FormMessage message={message} />
       {saved ? <p role="status" className="rounded-xl bg-sage-soft px-3.5 py-2.5 text-sm text-ink">Practice saved. Well done.</p> : null}
       <div className="grid grid-cols-2 gap-3">
