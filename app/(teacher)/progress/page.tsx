@@ -12,6 +12,9 @@ import { ProgressChart } from "./chart-loader";
 export const metadata: Metadata = { title: "Progress" };
 export const dynamic = "force-dynamic";
 
+const chip =
+  "rounded-full border border-line bg-card px-3 py-1.5 font-bold text-walnut hover:border-walnut/50 aria-[current=page]:border-walnut aria-[current=page]:bg-walnut aria-[current=page]:text-paper";
+
 /** Practice entries per student (?student=) or per assignment (?assignment=), with a tempo chart. */
 export default async function ProgressPage({ searchParams }: { searchParams: Promise<{ student?: string; assignment?: string }> }) {
   const ctx = await requireTeacher();
@@ -35,9 +38,9 @@ export default async function ProgressPage({ searchParams }: { searchParams: Pro
     <div className="flex flex-col gap-6">
       <PageHeader title="Progress" lead="What your students practised, for how long, and how fast they got." />
       <nav aria-label="Students" className="flex flex-wrap gap-2 text-sm">
-        <Link href="/progress" className="underline" aria-current={!studentId ? "page" : undefined}>All</Link>
+        <Link href="/progress" className={chip} aria-current={!studentId ? "page" : undefined}>All students</Link>
         {students.map((s) => (
-          <Link key={s.membershipId} href={`/progress?student=${s.membershipId}`} className="underline" aria-current={s.membershipId === studentId ? "page" : undefined}>{s.name}</Link>
+          <Link key={s.membershipId} href={`/progress?student=${s.membershipId}`} className={chip} aria-current={s.membershipId === studentId ? "page" : undefined}>{s.name}</Link>
         ))}
       </nav>
       <h2 className="text-xl">{heading}</h2>
@@ -49,7 +52,7 @@ export default async function ProgressPage({ searchParams }: { searchParams: Pro
             <Card><ProgressChart data={data} series={series} /></Card>
           ) : null}
           <div className="overflow-x-auto rounded-xl border border-line bg-card">
-            <table className="w-full text-left text-sm" data-testid="progress-table">
+            <table className="w-full min-w-[44rem] text-left text-sm" data-testid="progress-table">
               <caption className="sr-only">Practice entries</caption>
               <thead className="border-b border-line bg-paper">
                 <tr>{["Date", "Student", "Sheet", "Minutes", "Tempo reached", "Ease", "Comment"].map((h) => <th key={h} scope="col" className="px-3 py-2 font-bold text-walnut">{h}</th>)}</tr>
@@ -57,7 +60,7 @@ export default async function ProgressPage({ searchParams }: { searchParams: Pro
               <tbody>
                 {[...entries].reverse().map((e) => (
                   <tr key={e.id} className="border-b border-line align-top last:border-0">
-                    <td className="px-3 py-2 font-mono text-xs">{e.practisedOn}</td>
+                    <td className="whitespace-nowrap px-3 py-2 font-mono text-xs">{e.practisedOn}</td>
                     <td className="px-3 py-2">{e.studentName}</td>
                     <td className="px-3 py-2">{e.sheetTitle}</td>
                     <td className="px-3 py-2">{e.minutes}</td>
