@@ -6,6 +6,7 @@ import { DownloadLinks } from "@/components/drills/download-links";
 import { DrillEngraving } from "@/components/drills/drill-engraving";
 import { DrillFacts } from "@/components/drills/drill-facts";
 import { DrillPlayer } from "@/components/drills/drill-player";
+import { PrintHandoutButton } from "@/components/handout/print-handout-button";
 import { db } from "@/db";
 import { getKnotHeading } from "@/db/queries/knot-drills";
 import { getSheet } from "@/db/queries/sheets";
@@ -45,9 +46,21 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
             {sheet.drills.length} drills{knot ? ` from ${knot.scoreTitle}, ${bars}` : ""}
           </p>
         </div>
-        <a href={`/api/sheets/${sheet.id}/zip`} download className="inline-flex items-center justify-center rounded-full bg-walnut px-5 py-2.5 text-sm font-bold text-paper hover:bg-walnut-soft">
-          Download all (zip: MusicXML, .mxl, MIDI)
-        </a>
+        <div className="flex flex-col gap-2 sm:items-end">
+          <div className="flex flex-wrap items-center gap-2">
+            <Link
+              href={`/assignments?sheet=${sheet.id}`}
+              className="inline-flex items-center justify-center rounded-full bg-sage px-4 py-2 text-sm font-bold text-paper hover:opacity-90"
+              data-testid="assign-sheet-link"
+            >
+              Assign to students
+            </Link>
+            <PrintHandoutButton sheetId={sheet.id} />
+          </div>
+          <a href={`/api/sheets/${sheet.id}/zip`} download className="text-sm font-bold text-walnut underline">
+            Download all drills (zip: MusicXML, .mxl, MIDI)
+          </a>
+        </div>
       </header>
       <Caution />
       <ol className="flex flex-col gap-5" aria-label="Drills in order">
