@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
@@ -19,9 +20,17 @@ export default async function PracticeLog() {
         <Card>
           <ul className="divide-y divide-line">
             {entries.map((e) => (
-              <li key={e.id} className="flex flex-wrap items-baseline justify-between gap-2 py-2">
-                <span className="font-bold">{e.sheetTitle}</span>
-                <span className="font-mono text-xs text-muted">{e.practisedOn} · {e.minutes} min · ease {e.ease}/5</span>
+              <li key={e.id} className="flex flex-col gap-0.5 py-2.5">
+                <span className="flex flex-wrap items-baseline justify-between gap-2">
+                  <Link href={`/my/assignments/${e.assignmentId}`} className="font-bold underline decoration-rosin">{e.sheetTitle}</Link>
+                  <span className="font-mono text-xs text-muted">{e.practisedOn} · {e.minutes} min · ease {e.ease}/5</span>
+                </span>
+                {Object.keys(e.tempos).length > 0 ? (
+                  <span className="text-sm">
+                    Tempo reached: up to ♩ {Math.max(...Object.values(e.tempos))} ({Object.keys(e.tempos).length === 1 ? "1 drill" : `${Object.keys(e.tempos).length} drills`})
+                  </span>
+                ) : null}
+                {e.comment ? <span className="text-sm text-muted">{e.comment}</span> : null}
               </li>
             ))}
           </ul>

@@ -51,8 +51,10 @@ export default async function StudentSheetPage({ params }: { params: Promise<{ a
       </nav>
       <section aria-labelledby="drills-heading" className="flex flex-col gap-3">
         <h2 id="drills-heading" className="text-xl">Drills</h2>
+        <p className="rounded-xl border border-rosin/40 bg-rosin-soft px-4 py-3 text-sm" role="note" data-testid="caution">
+          <strong>Caution.</strong> {HANDOUT_CAUTION}
+        </p>
         <SheetDrills drills={drills} />
-        <p className="rounded-xl bg-rosin-soft px-4 py-3 text-sm" role="note" data-testid="caution">{HANDOUT_CAUTION}</p>
       </section>
       <section aria-labelledby="log-heading">
         <Card>
