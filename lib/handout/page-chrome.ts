@@ -28,17 +28,22 @@ export function drawSheetHeader(doc: PDFKit.PDFDocument, input: HandoutInput): n
 }
 
 function drawMetaRow(doc: PDFKit.PDFDocument, input: HandoutInput, x: number, y: number, width: number): number {
-  const cells: [string, string][] = [];
-  if (input.studentName) cells.push(["Student", input.studentName]);
-  cells.push(["Date", input.date]);
+  // A copy printed without a student gets a blank line to write the name on.
+  const cells: [string, string | null][] = [["Student", input.studentName ?? null], ["Date", input.date]];
   let cx = x;
   for (const [label, value] of cells) {
     doc.font(FONT.regular).fontSize(STYLE.size.meta - 1.5).fillColor(STYLE.faint);
     const lw = doc.widthOfString(label.toUpperCase(), { characterSpacing: 0.8 });
     doc.text(label.toUpperCase(), cx, y + 1.5, { characterSpacing: 0.8, lineBreak: false });
-    doc.font(FONT.regular).fontSize(STYLE.size.meta).fillColor(STYLE.ink);
-    const vw = Math.min(doc.widthOfString(value), width / 2);
-    doc.text(value, cx + lw + 6, y, { width: vw + 1, lineBreak: false, ellipsis: true });
+    let vw: number = STYLE.blankNameWidth;
+    if (value === null) {
+      const ly = y + STYLE.size.meta + 1;
+      doc.moveTo(cx + lw + 6, ly).lineTo(cx + lw + 6 + vw, ly).lineWidth(0.5).strokeColor(STYLE.faint).stroke();
+    } else {
+      doc.font(FONT.regular).fontSize(STYLE.size.meta).fillColor(STYLE.ink);
+      vw = Math.min(doc.widthOfString(value), width / 2);
+      doc.text(value, cx + lw + 6, y, { width: vw + 1, lineBreak: false, ellipsis: true });
+    }
     cx += lw + 6 + vw + 26;
   }
   return y + 18;
@@ -80,8 +85,10 @@ export function drawFooters(doc: PDFKit.PDFDocument): void {
     doc.font(FONT.regular).fontSize(STYLE.size.footer + 0.5).fillColor(STYLE.muted);
     const pw = doc.widthOfString(pageLabel);
     doc.text(pageLabel, x + width - pw, y + 6, { width: pw + 1, lineBreak: false });
-    doc.font(FONT.italic).fontSize(STYLE.size.footer).fillColor(STYLE.muted);
-    doc.text(HANDOUT_CAUTION, x, y + 6, { width: width - pw - 30, lineGap: 1 });
+    doc.font(FONT.bold).fontSize(STYLE.size.footer).fillColor(STYLE.ink);
+    doc.text("Caution. ", x, y + 6, { width: width - pw - 30, lineGap: 1, continued: true });
+    doc.font(FONT.regular).fillColor(STYLE.ink);
+    doc.text(HANDOUT_CAUTION, { width: width - pw - 30, lineGap: 1 });
     doc.page.margins.bottom = saved;
   }
 }

@@ -16,13 +16,15 @@ export const STYLE = {
     tempo: 10.5,
     note: 10,
     warning: 9.5,
-    footer: 7.5,
+    footer: 8,
     running: 8.5,
   },
   /** Indent of the drill text under its number badge. */
   indent: 26,
   badge: 9.5,
   gapBetweenDrills: 22,
+  /** The blank line for a student's name on a copy printed without one. */
+  blankNameWidth: 150,
   /** Space the running header takes on pages after the first. */
   runningHeader: 26,
 } as const;
