@@ -117,7 +117,7 @@ export function GenerateWorkspace({
       </aside>
       <div className="flex min-w-0 flex-col gap-5">
         <div aria-live="polite" className="flex flex-col gap-2">
-          {!request && <p className="rounded-xl border border-dashed border-line p-6 text-center text-muted">Switch on the drill families you want, then press Generate.</p>}
+          {!request && <p className="rounded-xl border border-dashed border-line p-6 text-center text-muted">The families suggested for this knot are switched on. Add or remove families, adjust their options, then press Generate.</p>}
           {error && (
             <div role="alert" className="rounded-xl border border-madder/40 bg-madder-soft p-3 text-sm text-madder">
               <p className="font-bold">{error.message}</p>

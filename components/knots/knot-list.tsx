@@ -35,6 +35,7 @@ export function KnotList({ knots, empty, showPiece = false }: { knots: KnotListI
               </span>
             ) : null}
             {k.note ? <span className="mt-1.5 block text-sm">{k.note}</span> : null}
+            <span className="mt-1.5 block text-sm font-bold text-walnut underline decoration-rosin">Generate drills →</span>
           </Link>
         </li>
       ))}
