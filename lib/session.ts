@@ -5,6 +5,9 @@ import { db } from "../db";
 import { findMembershipForUser } from "../db/queries/memberships";
 import type { Role } from "../db/schema";
 import { auth, type AuthSession } from "./auth";
+import { createSessionMemo } from "./session-memo";
+
+const sessions = createSessionMemo<AuthSession>();
 
 export interface StudioContext {
   user: { id: string; name: string; email: string };
@@ -16,9 +19,13 @@ export interface StudioContext {
 
 /**
  * better-auth's session for this request, looked up once per request (React cache). With the
- * session cookie cache on (lib/auth.ts) this is usually a signature check, not a database read.
+ * session cookie cache on (lib/auth.ts) this is usually a signature check, not a database read,
+ * and a cookie pair better-auth has just accepted is answered from lib/session-memo.
  */
-export const getAuthSession = cache(async (): Promise<AuthSession | null> => auth.api.getSession({ headers: await headers() }));
+export const getAuthSession = cache(async (): Promise<AuthSession | null> => {
+  const h = await headers();
+  return sessions.get(h.get("cookie"), () => auth.api.getSession({ headers: h }));
+});
 
 /** The signed-in user with their studio and role, or null when anonymous (or without a studio). */
 export const getStudioContext = cache(async (): Promise<StudioContext | null> => {
