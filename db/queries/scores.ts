@@ -1,4 +1,4 @@
-import { and, count, desc, eq, inArray } from "drizzle-orm";
+import { and, count, desc, eq, inArray, sql } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { passage, score, sheet, type ScorePartSummary } from "../schema";
@@ -12,8 +12,10 @@ export async function listScores(database: Db, studioId: string) {
     .orderBy(desc(score.createdAt));
 }
 
-/** The studio's pieces for the pieces table: newest first, with how many knots each has. */
-export async function listScoresWithKnots(database: Db, studioId: string) {
+/** The pieces-table query, built once per database handle. */
+const piecesTable = new WeakMap<Db, ReturnType<typeof preparePiecesTable>>();
+
+function preparePiecesTable(database: Db) {
   return database
     .select({
       id: score.id,
@@ -25,9 +27,21 @@ export async function listScoresWithKnots(database: Db, studioId: string) {
     })
     .from(score)
     .leftJoin(passage, eq(passage.scoreId, score.id))
-    .where(inStudio(score, studioId))
+    .where(eq(score.studioId, sql.placeholder("studioId")))
     .groupBy(score.id)
-    .orderBy(desc(score.createdAt));
+    .orderBy(desc(score.createdAt))
+    .prepare();
+}
+
+/**
+ * The studio's pieces for the pieces table: newest first, with how many knots each has. One query
+ * (no per-piece look-ups), only the table's columns (never the MusicXML).
+ */
+export async function listScoresWithKnots(database: Db, studioId: string) {
+  if (!studioId) throw new Error("A studio id is required to scope a query.");
+  let query = piecesTable.get(database);
+  if (!query) piecesTable.set(database, (query = preparePiecesTable(database)));
+  return query.all({ studioId });
 }
 
 /** One piece of the studio with its cleaned MusicXML, or null (unknown id or another studio). */
