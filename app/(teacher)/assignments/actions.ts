@@ -20,5 +20,6 @@ export async function assignSheetAction(raw: unknown): Promise<ActionResult<{ id
 
 /** The assign form's action: its fields read into the same input, checked by the same schema. */
 export async function assignSheetFormAction(_previous: ActionResult<{ ids: string[] }> | null, form: FormData): Promise<ActionResult<{ ids: string[] }>> {
-  return assignSheetAction(assignmentFromForm(form));
+  // Anything but form data goes to the schema as it is (and is refused there, after the role check).
+  return assignSheetAction(form instanceof FormData ? assignmentFromForm(form) : form);
 }
