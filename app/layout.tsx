@@ -1,4 +1,8 @@
 import type { Metadata, Viewport } from "next";
+// The link component is used by every segment below (error boundary, not-found, section layouts,
+// pages). Imported here it lands in the root layout's chunk, which every page loads first, so those
+// segments share that one copy instead of each chunk carrying its own.
+import "next/link";
 import { figuresFont, headingFont, textFont } from "./fonts";
 import "./globals.css";
 
