@@ -138,3 +138,19 @@ describe("tables: plain from the server, interactive once loaded", () => {
     await context.close();
   });
 });
+
+describe("main navigation", () => {
+  test("the current section is marked, and the mark follows a client-side navigation", async () => {
+    const { context, page } = await open();
+    await page.goto("/pieces");
+    const nav = page.getByRole("navigation", { name: "Main" });
+    const current = () => nav.locator('[aria-current="page"]').allTextContents();
+    await expect.poll(current).toEqual(["Pieces"]);
+    await nav.getByRole("link", { name: "Students", exact: true }).click();
+    await page.waitForURL("**/students");
+    await expect.poll(current).toEqual(["Students"]);
+    await page.goto("/pieces/does-not-matter-which");
+    await expect.poll(current).toEqual(["Pieces"]);
+    await context.close();
+  });
+});
