@@ -107,7 +107,7 @@ describe("from teacher to student", () => {
     const drills = page.getByTestId("student-drill");
     await drills.first().locator("svg").first().waitFor({ timeout: 60_000 });
     expect(await drills.count()).toBeGreaterThan(0);
-    await expect(page.getByText("♩ = 54 → 84").first().isVisible()).resolves.toBe(true);
+    await expect(page.getByText("start ♩ = 54 → goal ♩ = 84").first().isVisible()).resolves.toBe(true);
     await expect(page.getByTestId("caution").textContent()).resolves.toMatch(/If you feel pain or tension/);
 
     // bad input: messages, and nothing in the history

@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
@@ -15,7 +16,15 @@ export function ForgotForm() {
     const answer = await authRequest("request-password-reset", { email, redirectTo: "/reset-password" });
     setState(answer.ok ? "sent" : "error");
   }
-  if (state === "sent") return <p role="status" className="text-sm">If an account uses that e-mail, a reset link is on its way. It works for one hour.</p>;
+  if (state === "sent")
+    return (
+      <div className="space-y-3 text-sm">
+        <p role="status">If an account uses that e-mail, a reset link is on its way. It works for one hour.</p>
+        <p>
+          <Link href="/sign-in" className="font-bold text-walnut underline">Back to sign-in</Link>
+        </p>
+      </div>
+    );
   return (
     <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
       <FormMessage message={state === "error" ? "Enter the e-mail you sign in with and try again." : null} />

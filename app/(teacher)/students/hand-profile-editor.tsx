@@ -29,14 +29,15 @@ export function HandProfileEditor({ membershipId, name, spanMm, octaveMm }: { me
       <input id={`${id}-span`} value={span} onChange={(e) => setSpan(e.target.value)} inputMode="decimal" className="w-20 rounded-lg border border-line bg-card px-2 py-1" />
       <label htmlFor={`${id}-unit`} className="sr-only">Unit</label>
       <select id={`${id}-unit`} value={unit} onChange={(e) => setUnit(e.target.value as "mm" | "in")} className="rounded-lg border border-line bg-card px-1 py-1">
-        <option value="mm">mm (comfortable)</option>
-        <option value="in">in (measured full span)</option>
+        <option value="mm">mm</option>
+        <option value="in">inches</option>
       </select>
       <label htmlFor={`${id}-octave`} className="sr-only">Keyboard of {name}</label>
-      <select id={`${id}-octave`} value={octave} onChange={(e) => setOctave(e.target.value)} className="max-w-48 rounded-lg border border-line bg-card px-1 py-1">
+      <select id={`${id}-octave`} value={octave} onChange={(e) => setOctave(e.target.value)} className="min-w-0 max-w-full flex-1 rounded-lg border border-line bg-card px-1 py-1 sm:max-w-48 sm:flex-none">
         {OCTAVE_WIDTHS.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
       </select>
       <button type="submit" disabled={busy} className="rounded-full border border-walnut/30 px-3 py-1 font-bold text-walnut">Save</button>
+      <span className="basis-full text-xs text-muted">mm: comfortable thumb-to-little-finger span · inches: the measured full span</span>
       {message ? <span role={message.ok ? "status" : "alert"} className={message.ok ? "text-sage" : "text-madder"}>{message.text}</span> : null}
     </form>
   );

@@ -27,7 +27,7 @@ export function SheetDrills({ drills }: { drills: StudentDrill[] }) {
         <li key={d.id} className="rounded-[var(--radius-card)] border border-line bg-card p-4" data-testid="student-drill">
           <div className="flex flex-wrap items-baseline justify-between gap-2">
             <h3 className="text-lg font-semibold">{i + 1}. {d.title}</h3>
-            {d.goal ? <p className="font-mono text-sm text-sage">♩ = {d.start ?? "…"} → {d.goal}</p> : null}
+            {d.goal ? <p className="font-mono text-sm text-sage">start ♩ = {d.start ?? "…"} → goal ♩ = {d.goal}</p> : null}
           </div>
           <DrillPreview musicxml={d.musicxml} label={d.title} className="mt-3" />
           {d.studentNote ? <p className="mt-3 text-sm">{d.studentNote}</p> : null}
