@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq } from "drizzle-orm";
+import { and, asc, count, desc, eq, sql } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { passage, score, sheet, sheetDrill, type SheetDrillMeta } from "../schema";
@@ -81,12 +81,24 @@ export async function getSheetDrill(database: Db, drillId: string) {
 }
 
 /**
- * A sheet of the studio for its JSON view: the sheet, its knot and piece (null when the knot is
- * gone), and its drills in order; the drills' MusicXML only when asked for. Null when the sheet is
- * not this studio's.
+ * A sheet of the studio for its JSON view, in one query: the sheet, its knot and piece (null when
+ * the knot is gone), and its drills in order; the drills' MusicXML only when asked for. Null when the
+ * sheet is not this studio's.
  */
 export async function getSheetOverview(database: Db, studioId: string, sheetId: string, opts: { musicxml: boolean }) {
-  const [head] = await database
+  const drillColumns = {
+    id: sheetDrill.id,
+    position: sheetDrill.position,
+    family: sheetDrill.family,
+    variant: sheetDrill.variant,
+    title: sheetDrill.title,
+    teacherNote: sheetDrill.teacherNote,
+    studentNote: sheetDrill.studentNote,
+    meta: sheetDrill.meta,
+    // The stored MusicXML is the bulk of a drill row: read only when asked for.
+    musicxml: opts.musicxml ? sheetDrill.musicxml : sql<string | null>`null`,
+  };
+  const rows = await database
     .select({
       id: sheet.id,
       title: sheet.title,
@@ -101,25 +113,17 @@ export async function getSheetOverview(database: Db, studioId: string, sheetId: 
       pieceId: score.id,
       pieceTitle: score.title,
       composer: score.composer,
+      drill: drillColumns,
     })
     .from(sheet)
     .leftJoin(passage, and(eq(passage.id, sheet.passageId), eq(passage.studioId, studioId)))
     .leftJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .leftJoin(sheetDrill, eq(sheetDrill.sheetId, sheet.id))
     .where(inStudio(sheet, studioId, eq(sheet.id, sheetId)))
-    .limit(1);
-  if (!head) return null;
-  const columns = {
-    id: sheetDrill.id,
-    position: sheetDrill.position,
-    family: sheetDrill.family,
-    variant: sheetDrill.variant,
-    title: sheetDrill.title,
-    teacherNote: sheetDrill.teacherNote,
-    studentNote: sheetDrill.studentNote,
-    meta: sheetDrill.meta,
-  };
-  const drills = opts.musicxml
-    ? await database.select({ ...columns, musicxml: sheetDrill.musicxml }).from(sheetDrill).where(eq(sheetDrill.sheetId, head.id)).orderBy(asc(sheetDrill.position))
-    : await database.select(columns).from(sheetDrill).where(eq(sheetDrill.sheetId, head.id)).orderBy(asc(sheetDrill.position));
-  return { ...head, drills: drills as ((typeof drills)[number] & { musicxml?: string })[] };
+    .orderBy(asc(sheetDrill.position));
+  const [first] = rows;
+  if (!first) return null;
+  const { drill: _drill, ...head } = first;
+  const drills = rows.flatMap((r) => (r.drill ? [r.drill] : []));
+  return { ...head, drills };
 }

@@ -95,6 +95,15 @@ describe("sheet JSON", () => {
     expect((await get("teacher", crypto.randomUUID())).status).toBe(404);
   });
 
+  test("a sheet without drills (and without a knot) answers with an empty list", async () => {
+    const [teacher] = await t.db.select().from(schema.sheet).where(eq(schema.sheet.id, sheetId));
+    const id = crypto.randomUUID();
+    await t.db.insert(schema.sheet).values({ id, studioId: teacher.studioId, passageId: null, title: "Blank page", createdBy: teacher.createdBy });
+    const { status, body } = await get("teacher", id);
+    expect(status).toBe(200);
+    expect(body.sheet).toMatchObject({ title: "Blank page", knot: null, drills: [] });
+  });
+
   test("a signed-out caller gets 401", async () => {
     expect((await get("anonymous")).status).toBe(401);
   });

@@ -19,8 +19,9 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
   if (!(await canReadSheet(ctx, sheetId))) return notFoundResponse();
   const include = new URL(request.url).searchParams.getAll("include").flatMap((v) => v.split(","));
   const student = ctx.role === "student";
+  const withMusicXml = include.includes("musicxml");
   const [sheet, assigned] = await Promise.all([
-    getSheetOverview(db, ctx.studioId, sheetId, { musicxml: include.includes("musicxml") }),
+    getSheetOverview(db, ctx.studioId, sheetId, { musicxml: withMusicXml }),
     student ? latestAssignmentOfSheet(db, ctx.studioId, sheetId, ctx.membershipId) : Promise.resolve(null),
   ]);
   if (!sheet) return notFoundResponse();
@@ -57,7 +58,7 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
           start: d.meta.tempo?.start ?? null,
           target: goals[d.id] ?? d.meta.tempo?.target ?? null,
         },
-        ...(d.musicxml !== undefined ? { musicxml: d.musicxml } : {}),
+        ...(withMusicXml ? { musicxml: d.musicxml } : {}),
       })),
     },
   });
