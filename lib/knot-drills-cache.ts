@@ -20,9 +20,11 @@ export interface KnotStamp extends Pick<KnotSource, "part" | "hand" | "fromBar" 
 }
 
 const MAX_BODIES = 256;
-const MAX_CHARS = 32 * 1024 * 1024;
-const bodies = new Lru<string, string>({ maxEntries: MAX_BODIES, maxWeight: MAX_CHARS, weigh: (s) => s.length });
-const pending = new Map<string, Promise<string | null>>();
+const MAX_BYTES = 32 * 1024 * 1024;
+/** UTF-8 bytes, encoded once: the same answer is written many times. */
+const bodies = new Lru<string, Uint8Array<ArrayBuffer>>({ maxEntries: MAX_BODIES, maxWeight: MAX_BYTES, weigh: (b) => b.byteLength });
+const pending = new Map<string, Promise<Uint8Array<ArrayBuffer> | null>>();
+const utf8 = new TextEncoder();
 
 /** JSON with object keys sorted at every level, so equal requests give equal text. */
 export function stableJson(value: unknown): string {
@@ -49,7 +51,7 @@ export function drillsCacheKey(knot: KnotStamp, req: GenerateRequest, profile?: 
 }
 
 /**
- * The generate handler's JSON body for the knot, from the cache or freshly generated. The piece's
+ * The generate handler's JSON body (UTF-8) for the knot, from the cache or freshly generated. The piece's
  * MusicXML is loaded only when its parsed copy is not cached; null when it is gone. Throws ScoreError
  * when the knot's bars cannot be read (nothing is cached then).
  */
@@ -58,7 +60,7 @@ export async function knotDrillsBody(
   req: GenerateRequest,
   profile: HandProfile | undefined,
   loadMusicXml: () => Promise<string | null>,
-): Promise<string | null> {
+): Promise<Uint8Array<ArrayBuffer> | null> {
   const key = drillsCacheKey(knot, req, profile);
   const hit = bodies.get(key);
   if (hit !== undefined) return hit;
@@ -72,7 +74,7 @@ export async function knotDrillsBody(
       if (xml === null) return null;
       score = parsedScore(xml, stamp);
     }
-    const body = JSON.stringify(knotDrillsJson(generateForPassage(passageOf(score, knot), req, profile)));
+    const body = utf8.encode(JSON.stringify(knotDrillsJson(generateForPassage(passageOf(score, knot), req, profile))));
     bodies.set(key, body);
     return body;
   })();

@@ -28,7 +28,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
   try {
     const json = await knotDrillsBody(knot, req, profile, () => getScoreMusicXml(db, ctx.studioId, knot.scoreId));
     if (json === null) return notFoundResponse();
-    return new Response(json, { headers: { "content-type": "application/json" } });
+    return new Response(json, { headers: { "content-type": "application/json", "content-length": String(json.byteLength) } });
   } catch (err) {
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
     throw err;
