@@ -1,12 +1,11 @@
 import { asc, eq, sql } from "drizzle-orm";
 import type { Db } from "../index";
 import { membership, studio } from "../schema";
+import { preparedFor } from "./prepared";
 
-/** The query, built once per database handle: it runs on every signed-in request. */
-const prepared = new WeakMap<Db, ReturnType<typeof prepare>>();
-
-function prepare(database: Db) {
-  return database
+/** Runs on every signed-in request: built once per database handle. */
+const membershipOfUser = preparedFor((database: Db) =>
+  database
     .select({
       membershipId: membership.id,
       studioId: membership.studioId,
@@ -18,13 +17,11 @@ function prepare(database: Db) {
     .where(eq(membership.userId, sql.placeholder("userId")))
     .orderBy(asc(membership.createdAt))
     .limit(1)
-    .prepare();
-}
+    .prepare(),
+);
 
 /** The caller's membership (the oldest, if a user ever has several) with its studio name. One indexed look-up (membership_user_idx). */
 export async function findMembershipForUser(database: Db, userId: string) {
-  let query = prepared.get(database);
-  if (!query) prepared.set(database, (query = prepare(database)));
-  const rows = await query.all({ userId });
+  const rows = await membershipOfUser(database).all({ userId });
   return rows[0] ?? null;
 }

@@ -2,6 +2,7 @@ import { and, count, desc, eq, inArray, sql } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { passage, score, sheet, type ScorePartSummary } from "../schema";
+import { preparedFor } from "./prepared";
 
 /** The studio's pieces, newest first, without their MusicXML. */
 export async function listScores(database: Db, studioId: string) {
@@ -13,10 +14,8 @@ export async function listScores(database: Db, studioId: string) {
 }
 
 /** The pieces-table query, built once per database handle. */
-const piecesTable = new WeakMap<Db, ReturnType<typeof preparePiecesTable>>();
-
-function preparePiecesTable(database: Db) {
-  return database
+const piecesTable = preparedFor((database: Db) =>
+  database
     .select({
       id: score.id,
       title: score.title,
@@ -30,8 +29,8 @@ function preparePiecesTable(database: Db) {
     .where(eq(score.studioId, sql.placeholder("studioId")))
     .groupBy(score.id)
     .orderBy(desc(score.createdAt))
-    .prepare();
-}
+    .prepare(),
+);
 
 /**
  * The studio's pieces for the pieces table: newest first, with how many knots each has. One query
@@ -39,9 +38,7 @@ function preparePiecesTable(database: Db) {
  */
 export async function listScoresWithKnots(database: Db, studioId: string) {
   if (!studioId) throw new Error("A studio id is required to scope a query.");
-  let query = piecesTable.get(database);
-  if (!query) piecesTable.set(database, (query = preparePiecesTable(database)));
-  return query.all({ studioId });
+  return piecesTable(database).all({ studioId });
 }
 
 /** One piece of the studio with its cleaned MusicXML, or null (unknown id or another studio). */

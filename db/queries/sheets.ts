@@ -2,6 +2,7 @@ import { and, asc, count, desc, eq, sql } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { passage, score, sheet, sheetDrill, type SheetDrillMeta } from "../schema";
+import { preparedFor } from "./prepared";
 
 /** The studio's drill sheets with how many drills each holds. */
 export async function listSheets(database: Db, studioId: string) {
@@ -63,9 +64,13 @@ export async function getSheet(database: Db, studioId: string, sheetId: string) 
   return { ...row, drills };
 }
 
+const studioOfSheet = preparedFor((database: Db) =>
+  database.select({ studioId: sheet.studioId }).from(sheet).where(eq(sheet.id, sql.placeholder("sheetId"))).limit(1).prepare(),
+);
+
 /** The studio a sheet belongs to (for access checks), or null. */
 export async function sheetStudio(database: Db, sheetId: string): Promise<string | null> {
-  const [row] = await database.select({ studioId: sheet.studioId }).from(sheet).where(eq(sheet.id, sheetId)).limit(1);
+  const [row] = await studioOfSheet(database).all({ sheetId });
   return row?.studioId ?? null;
 }
 
@@ -80,25 +85,8 @@ export async function getSheetDrill(database: Db, drillId: string) {
   return row ? { ...row.drill, studioId: row.studioId } : null;
 }
 
-/**
- * A sheet of the studio for its JSON view, in one query: the sheet, its knot and piece (null when
- * the knot is gone), and its drills in order; the drills' MusicXML only when asked for. Null when the
- * sheet is not this studio's.
- */
-export async function getSheetOverview(database: Db, studioId: string, sheetId: string, opts: { musicxml: boolean }) {
-  const drillColumns = {
-    id: sheetDrill.id,
-    position: sheetDrill.position,
-    family: sheetDrill.family,
-    variant: sheetDrill.variant,
-    title: sheetDrill.title,
-    teacherNote: sheetDrill.teacherNote,
-    studentNote: sheetDrill.studentNote,
-    meta: sheetDrill.meta,
-    // The stored MusicXML is the bulk of a drill row: read only when asked for.
-    musicxml: opts.musicxml ? sheetDrill.musicxml : sql<string | null>`null`,
-  };
-  const rows = await database
+function overviewQuery(database: Db, musicxml: boolean) {
+  return database
     .select({
       id: sheet.id,
       title: sheet.title,
@@ -113,14 +101,39 @@ export async function getSheetOverview(database: Db, studioId: string, sheetId: 
       pieceId: score.id,
       pieceTitle: score.title,
       composer: score.composer,
-      drill: drillColumns,
+      drill: {
+        id: sheetDrill.id,
+        position: sheetDrill.position,
+        family: sheetDrill.family,
+        variant: sheetDrill.variant,
+        title: sheetDrill.title,
+        teacherNote: sheetDrill.teacherNote,
+        studentNote: sheetDrill.studentNote,
+        meta: sheetDrill.meta,
+        // The stored MusicXML is the bulk of a drill row: read only when asked for.
+        musicxml: musicxml ? sheetDrill.musicxml : sql<string | null>`null`,
+      },
     })
     .from(sheet)
-    .leftJoin(passage, and(eq(passage.id, sheet.passageId), eq(passage.studioId, studioId)))
-    .leftJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
+    .leftJoin(passage, and(eq(passage.id, sheet.passageId), eq(passage.studioId, sql.placeholder("studioId"))))
+    .leftJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, sql.placeholder("studioId"))))
     .leftJoin(sheetDrill, eq(sheetDrill.sheetId, sheet.id))
-    .where(inStudio(sheet, studioId, eq(sheet.id, sheetId)))
-    .orderBy(asc(sheetDrill.position));
+    .where(and(eq(sheet.studioId, sql.placeholder("studioId")), eq(sheet.id, sql.placeholder("sheetId"))))
+    .orderBy(asc(sheetDrill.position))
+    .prepare();
+}
+const overviewWithMusicXml = preparedFor((database: Db) => overviewQuery(database, true));
+const overviewWithoutMusicXml = preparedFor((database: Db) => overviewQuery(database, false));
+
+/**
+ * A sheet of the studio for its JSON view, in one query: the sheet, its knot and piece (null when
+ * the knot is gone), and its drills in order; the drills' MusicXML only when asked for. Null when the
+ * sheet is not this studio's.
+ */
+export async function getSheetOverview(database: Db, studioId: string, sheetId: string, opts: { musicxml: boolean }) {
+  if (!studioId) throw new Error("A studio id is required to scope a query.");
+  const query = opts.musicxml ? overviewWithMusicXml(database) : overviewWithoutMusicXml(database);
+  const rows = await query.all({ studioId, sheetId });
   const [first] = rows;
   if (!first) return null;
   const { drill: _drill, ...head } = first;
