@@ -1,7 +1,8 @@
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { handProfile, membership, passage, score, user } from "../schema";
+import { preparedFor } from "./prepared";
 
 /** One knot of the studio with its piece's cleaned MusicXML, or null (unknown id or another studio). */
 export async function getKnotSource(database: Db, studioId: string, knotId: string) {
@@ -28,12 +29,8 @@ export async function getKnotSource(database: Db, studioId: string, knotId: stri
   return row ?? null;
 }
 
-/**
- * One knot of the studio with its piece's id and both rows' change stamps, without the MusicXML
- * (the generate handler reads the piece only when its parsed copy is not cached).
- */
-export async function getKnotStamp(database: Db, studioId: string, knotId: string) {
-  const [row] = await database
+const knotStamp = preparedFor((database: Db) =>
+  database
     .select({
       id: passage.id,
       scoreId: passage.scoreId,
@@ -45,9 +42,19 @@ export async function getKnotStamp(database: Db, studioId: string, knotId: strin
       scoreUpdatedAt: score.updatedAt,
     })
     .from(passage)
-    .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
-    .where(inStudio(passage, studioId, eq(passage.id, knotId)))
-    .limit(1);
+    .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, sql.placeholder("studioId"))))
+    .where(and(eq(passage.studioId, sql.placeholder("studioId")), eq(passage.id, sql.placeholder("knotId"))))
+    .limit(1)
+    .prepare(),
+);
+
+/**
+ * One knot of the studio with its piece's id and both rows' change stamps, without the MusicXML
+ * (the generate handler reads the piece only when its parsed copy is not cached).
+ */
+export async function getKnotStamp(database: Db, studioId: string, knotId: string) {
+  if (!studioId) throw new Error("A studio id is required to scope a query.");
+  const [row] = await knotStamp(database).all({ studioId, knotId });
   return row ?? null;
 }
 
