@@ -41,8 +41,9 @@ function actionId(name: string): string | null {
   return Object.entries(manifest.node).find(([, a]) => a.exportedName === name)?.[0] ?? null;
 }
 
-async function callAction(base: string, id: string, cookie: string, input: unknown): Promise<string> {
-  const body = await encodeReply([input]);
+/** Call a server action over HTTP as the browser does; `args` are its arguments in order. */
+async function callAction(base: string, id: string, cookie: string, ...args: unknown[]): Promise<string> {
+  const body = await encodeReply(args);
   const res = await fetch(`${base}/`, {
     method: "POST",
     headers: { "next-action": id, origin: base, cookie, accept: "text/x-component", "content-type": "text/plain;charset=UTF-8" },
@@ -83,7 +84,8 @@ function killHard(child: ChildProcess) {
 
 /** Writers loop until `stop()` says so; only answers the server completed count as acknowledged. */
 async function writeLoad(base: string, ids: SeedIds, cookies: { teacher: string; student: string }, acks: Acks, stop: () => boolean, round: number) {
-  const assignId = actionId("assignSheetAction");
+  // The assign form submits through useActionState: (previous result, fields).
+  const assignId = actionId("assignSheetFormAction");
   const practiceId = actionId("logPracticeAction");
   const today = new Date().toISOString().slice(0, 10);
   const due = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
@@ -107,7 +109,7 @@ async function writeLoad(base: string, ids: SeedIds, cookies: { teacher: string;
     while (assignId && !stop()) {
       acks.attempts++;
       const note = `crash batch ${round}-${n++}`;
-      const data = okData(await callAction(base, assignId, cookies.teacher, {
+      const data = okData(await callAction(base, assignId, cookies.teacher, null, {
         sheetId: ids.sheetId, studentMembershipIds: [ids.studentMembershipId, ids.secondStudentMembershipId], dueDate: due, tempoGoals: {}, note,
       }));
       if (!data) throw new Error("assign answered without { ok: true }");
@@ -183,7 +185,7 @@ export async function crashTest(kills: number, log: (line: string) => void = con
       // each kill lands among writes in flight whatever the machine's speed.
       const total = () => [acks.sheets.length, acks.assignmentBatches.length, acks.practice.length];
       const before = total();
-      const active = [true, Boolean(actionId("assignSheetAction")), Boolean(actionId("logPracticeAction"))];
+      const active = [true, Boolean(actionId("assignSheetFormAction")), Boolean(actionId("logPracticeAction"))];
       const deadline = Date.now() + 60_000;
       while (total().some((n, i) => active[i] && n === before[i]) && Date.now() < deadline) await new Promise((r) => setTimeout(r, 20));
       await new Promise((r) => setTimeout(r, Math.random() * 600));
