@@ -6,40 +6,43 @@ import type { Hand, NoteEvent, Passage, Pitch } from "../score/types";
 import type { HandProfile, SpanReport } from "./types";
 import { DEFAULT_PROFILE, spanOf } from "./hand";
 import { estimateFingering } from "./fingering";
+import { mergeTies } from "../score/ties";
 
 /** The profile drills use when none is given (hand.ts `DEFAULT_PROFILE`). */
 export const PROFILE: HandProfile = DEFAULT_PROFILE;
 
 /**
  * The widest stretch among notes that sound together in these events (one hand), or null when
- * there are no notes. Fingering narrows the limit when every note of the chord has one.
+ * there are no notes. "Together" means overlapping in time, not only struck together: a note held
+ * (ties merged) while others are struck counts with them, as in a held-tone drill. The set of
+ * sounding notes only grows at an onset, so each onset's sounding set is measured. Fingering
+ * narrows the limit when every note of the set has one.
  *
  * @example
  * measureSpan(drill.score.events.filter((e) => e.staff === 1), PROFILE)?.semitones;
  */
 export function measureSpan(events: readonly NoteEvent[], profile: HandProfile): SpanReport | null {
-  // Notes struck together, by onset (onsets as numbers: different onsets with small denominators
-  // never share a double). A single note spans nothing, so only chords are measured.
-  const byOnset = new Map<number, NoteEvent[]>();
-  let notes = 0;
-  for (const e of events) {
-    if (!e.pitch || e.grace) continue;
-    notes++;
-    const k = e.onset.valueOf();
-    const chord = byOnset.get(k);
-    if (chord) chord.push(e); else byOnset.set(k, [e]);
-  }
-  if (notes === 0) return null;
+  const notes = mergeTies(events.filter((e) => e.pitch && !e.grace)).sort((a, b) => a.onset.compare(b.onset));
+  if (notes.length === 0) return null;
   let worst: SpanReport | null = null;
-  for (const chord of byOnset.values()) {
-    if (chord.length < 2) continue;
-    const fingers = chord.map((e) => e.fingering?.[0]?.finger ?? null);
-    const report = spanOf(chord, fingers.every((f) => f !== null) ? fingers : null, profile);
+  let sounding: { e: NoteEvent; end: number }[] = [];
+  for (let i = 0; i < notes.length; ) {
+    // Onsets as numbers: different onsets with small denominators never share a double.
+    const t = notes[i]!.onset.valueOf();
+    sounding = sounding.filter((s) => s.end > t);
+    for (; i < notes.length && notes[i]!.onset.valueOf() === t; i++) {
+      const e = notes[i]!;
+      sounding.push({ e, end: e.onset.add(e.duration).valueOf() });
+    }
+    if (sounding.length < 2) continue;
+    const set = sounding.map((s) => s.e);
+    const fingers = set.map((e) => e.fingering?.[0]?.finger ?? null);
+    const report = spanOf(set, fingers.every((f) => f !== null) ? fingers : null, profile);
     if (!worst || report.mm > worst.mm || (report.mm === worst.mm && report.overComfortable && !worst.overComfortable)) {
       worst = report;
     }
   }
-  return worst ?? spanOf([events.find((e) => e.pitch && !e.grace)!], null, profile);
+  return worst ?? spanOf([notes[0]!], null, profile);
 }
 
 /**
