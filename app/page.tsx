@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { KNOT_PATH, Wordmark } from "@/components/logo-mark";
 import { ButtonLink } from "@/components/ui/button";
+import { CAUTION } from "@/lib/caution";
 import { getStudioContext, homePathFor } from "@/lib/session";
 
 const FAMILIES = [
@@ -117,10 +118,9 @@ export default async function Landing() {
 
         <section className="mx-auto max-w-6xl px-4 py-14 sm:px-6">
           <div className="rounded-[var(--radius-card)] border border-rosin/50 bg-rosin-soft/60 p-6">
-            <h2 className="text-2xl font-semibold">A word of caution</h2>
+            <h2 className="text-2xl font-semibold">{CAUTION.title}</h2>
             <p className="mt-2 max-w-3xl">
-              A generated drill is a suggestion, not a prescription. Practise without strain; stop on any pain or
-              tension, and defer to a qualified teacher or health professional. Knotwork warns when a drill asks for a
+              {CAUTION.text} Knotwork warns when a drill asks for a
               wider stretch than a student&apos;s hand profile, but it cannot see the hand.
             </p>
           </div>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { Caution } from "@/components/drills/caution";
+import { CAUTION } from "@/lib/caution";
 import { Wordmark } from "@/components/logo-mark";
 
 export const metadata: Metadata = { title: "About and credits" };
@@ -109,7 +110,7 @@ export default function AboutPage() {
           </p>
         </Section>
 
-        <Section id="about-caution" title="A word of caution">
+        <Section id="about-caution" title={CAUTION.title}>
           <Caution />
           <p className="text-sm">
             Knotwork warns when a drill asks for a wider stretch than a student&apos;s hand profile, but it cannot see

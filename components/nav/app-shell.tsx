@@ -1,5 +1,6 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
+import { CAUTION } from "@/lib/caution";
 import type { StudioContext } from "@/lib/session";
 import { Wordmark } from "../logo-mark";
 import { NAV_BY_ROLE } from "./nav-items";
@@ -34,7 +35,7 @@ export function AppShell({ ctx, children }: { ctx: StudioContext; children: Reac
         {children}
       </main>
       <footer className="border-t border-line px-4 py-5 text-center text-xs text-muted">
-        A generated drill is a suggestion. Stop on pain or tension, and defer to a qualified teacher or health professional.
+        {CAUTION.text}
         {" · "}<Link href="/about" className="underline">About and credits</Link>
       </footer>
     </div>

@@ -4,6 +4,7 @@ import { useMemo, useState } from "react";
 import type { BarSelection } from "@/components/score/bar-selection";
 import { KnotForm, type KnotDraft } from "@/components/knots/knot-form";
 import type { ActionResult } from "@/lib/action-result";
+import { CAUTION } from "@/lib/caution";
 import { HardestBars } from "./hardest-bars";
 import type { PieceWorkspaceData } from "./piece-workspace-types";
 
@@ -88,7 +89,7 @@ export function PieceWorkspace({
           <h2 id="mark-knot-title" className="mb-3 text-lg font-semibold">Mark a knot</h2>
           <KnotForm selection={selection} describe={describe} tags={tags} save={(input) => saveKnot(input)} />
           <p className="mt-4 border-t border-line pt-3 text-xs text-muted">
-            Drills are suggestions. Stop on any pain or tension, and defer to a qualified teacher or health professional.
+            {CAUTION.text}
           </p>
         </section>
         {showHeat ? (

@@ -3,6 +3,7 @@
  * route handler and the renderer accept the same shape.
  */
 import { z } from "zod";
+import { CAUTION } from "../caution";
 
 export const PAPER_SIZES = ["a4", "letter"] as const;
 export type Paper = (typeof PAPER_SIZES)[number];
@@ -33,10 +34,8 @@ export const HandoutInputSchema = z.object({
 export type HandoutDrill = z.infer<typeof HandoutDrillSchema>;
 export type HandoutInput = z.infer<typeof HandoutInputSchema>;
 
-/** The caution printed in the footer of every handout page. */
-export const HANDOUT_CAUTION =
-  "These drills are suggestions, not prescriptions. If you feel pain or tension, stop straight away and rest, " +
-  "then talk it over with your teacher or a health professional before going on.";
+/** The caution printed in the footer of every handout page: the product's one caution text. */
+export const HANDOUT_CAUTION: string = CAUTION.text;
 
 /** Page sizes in PDF points (1/72 in): A4 per ISO 216 (210 × 297 mm), Letter per ANSI/ASME Y14.1 (8.5 × 11 in). */
 export const PAGE_SIZE_PT: Record<Paper, { width: number; height: number }> = {

@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
 import type { Browser } from "playwright-core";
+import { CAUTION } from "@/lib/caution";
 import { launchChromium, shoot } from "./chromium";
 
 const baseURL = inject("baseURL");
@@ -26,7 +27,7 @@ describe("foundation in the browser", () => {
       expect(res?.status()).toBe(200);
       await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toMatch(/bars that trip/);
       await expect(page.getByText("What is a knot?").isVisible()).resolves.toBe(true);
-      await expect(page.getByText(/stop on any pain or\s+tension/).isVisible()).resolves.toBe(true);
+      await expect(page.getByText(CAUTION.text).isVisible()).resolves.toBe(true);
       // Nothing wider than the viewport on a phone.
       const wide = await page.evaluate(() =>
         [...document.querySelectorAll("body *")]

@@ -2,6 +2,7 @@ import { Midi } from "@tonejs/midi";
 import { unzipSync } from "fflate";
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
 import type { Browser, Page } from "playwright-core";
+import { CAUTION } from "@/lib/caution";
 import { describeViolations, seriousViolations } from "./axe";
 import { launchChromium, shoot } from "./chromium";
 import { notesOf, seededKnotPath, sheetOrder, signIn, soundingCount, tabTo, waitForEngravings } from "./generate-support";
@@ -24,7 +25,6 @@ async function newPage(width: number): Promise<Page> {
   return context.newPage();
 }
 
-const CAUTION = /A drill is a suggestion, not a prescription\. Stop on pain or tension; defer to a qualified teacher or a health professional\./;
 
 describe("generate drills for a knot and save a drill sheet", () => {
   test("with the mouse: generate, regenerate on an option, pick three, reorder, save", async () => {
@@ -32,7 +32,8 @@ describe("generate drills for a knot and save a drill sheet", () => {
     await signIn(page);
     knotPath = await seededKnotPath(page);
     await page.goto(knotPath);
-    await expect(page.getByText(CAUTION).isVisible()).resolves.toBe(true);
+    await expect(page.getByTestId("caution").isVisible()).resolves.toBe(true);
+    await expect(page.getByTestId("caution").textContent()).resolves.toContain(CAUTION.text);
     await expect(page.getByRole("list", { name: "Problem tags" }).textContent()).resolves.toContain("evenness");
     // suggestFamilies(["evenness", …]) switches its families on before anything is generated.
     expect(await page.locator('input[role="switch"]:checked').count()).toBeGreaterThan(0);
@@ -77,7 +78,8 @@ describe("generate drills for a knot and save a drill sheet", () => {
     await page.waitForURL(/\/sheets\/[^/]+$/);
     sheetPath = new URL(page.url()).pathname;
     await expect(page.locator('[data-testid="sheet-drill-title"]').allTextContents()).resolves.toEqual(titles);
-    await expect(page.getByText(CAUTION).isVisible()).resolves.toBe(true);
+    await expect(page.getByTestId("caution").isVisible()).resolves.toBe(true);
+    await expect(page.getByTestId("caution").textContent()).resolves.toContain(CAUTION.text);
     await page.context().close();
   });
 

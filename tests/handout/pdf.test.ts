@@ -2,7 +2,8 @@
 // with poppler's pdftoppm, page sizes against ISO 216 (A4) and ANSI/ASME Y14.1 (Letter).
 import { beforeAll, describe, expect, test } from "vitest";
 import PDFDocument from "pdfkit";
-import { HANDOUT_CAUTION, handoutFontPath, renderHandoutPdf, type HandoutInput } from "@/lib/handout";
+import { CAUTION } from "@/lib/caution";
+import { handoutFontPath, renderHandoutPdf, type HandoutInput } from "@/lib/handout";
 import { hasPdftoppm, inkShare, readPdfPages, renderPages, squash, type PdfPageText } from "./pdf-tools";
 import { eightDrillSheet } from "./sample-sheet";
 
@@ -40,7 +41,7 @@ describe("renderHandoutPdf", () => {
   });
 
   test("every page carries the caution and 'page n of m'", () => {
-    const caution = squash(HANDOUT_CAUTION);
+    const caution = squash(CAUTION.text);
     for (const [i, pages] of [a4Pages, letterPages].entries()) {
       expect(pages.length, `document ${i}`).toBeGreaterThan(0);
       pages.forEach((p, n) => {

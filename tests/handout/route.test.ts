@@ -65,12 +65,12 @@ describe("GET /api/sheets/[sheetId]/handout — the PDF", () => {
   });
 
   test("text holds the sheet title, every drill title and the caution (read with pdfjs-dist)", async () => {
-    const { HANDOUT_CAUTION } = await import("@/lib/handout");
+    const { CAUTION } = await import("@/lib/caution");
     const pages = await readPdfPages(teacherPdf);
     const all = squash(pages.map((p) => p.text).join(" "));
     expect(all).toContain("Even triplets in the study");
     for (const title of f.drillTitles) expect(all).toContain(title);
-    expect(all).toContain(squash(HANDOUT_CAUTION));
+    expect(all).toContain(squash(CAUTION.text));
   });
 
   test("the assigned student's copy carries their name and their tempo goal", async () => {
