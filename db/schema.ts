@@ -147,8 +147,18 @@ export const sheet = sqliteTable(
   ],
 );
 
+/** A hand's widest stretch as saved with a drill; the flags are against `SheetDrillMeta.profile`. */
+export interface SheetDrillSpan {
+  semitones: number;
+  mm: number;
+  overComfortable?: boolean;
+  overPractical?: boolean;
+}
+
 export interface SheetDrillMeta {
-  maxSpan?: { right?: { semitones: number; mm: number }; left?: { semitones: number; mm: number } };
+  maxSpan?: { right?: SheetDrillSpan; left?: SheetDrillSpan };
+  /** The hand profile the drill was generated (and its span measured) for. */
+  profile?: { spanMm: number; octaveMm: number };
   warnings?: string[];
   tempo?: { start: number; target: number };
   hands?: "right" | "left" | "both";

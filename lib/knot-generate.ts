@@ -2,7 +2,7 @@
  * Drills for a stored knot: cut the knot's bars out of the piece's cleaned copy, run the chosen
  * families with the hand profile, and turn each drill into its browser JSON.
  */
-import { generateDrills, type Drill, type HandProfile } from "./drills/index";
+import { DEFAULT_PROFILE, generateDrills, type Drill, type HandProfile } from "./drills/index";
 import { drillKeys, toDrillDto, type DrillDto } from "./drill-dto";
 import type { GenerateRequest } from "./generate-request";
 import { barIndex, selectPassage } from "./score/index";
@@ -47,6 +47,8 @@ export function passageOf(score: Score, src: Pick<KnotSource, "part" | "hand" | 
 export interface KnotDrills {
   drills: { drill: Drill; key: string }[];
   skipped: { family: string; reason: string }[];
+  /** The hand profile the spans were measured for (the default hand when the request named none). */
+  profile?: HandProfile;
 }
 
 /** Run the request on the knot; the same request always gives the same drills (fixed seed). */
@@ -58,7 +60,7 @@ export function generateForKnot(src: KnotSource, req: GenerateRequest, profile?:
 export function generateForPassage(passage: Passage, req: GenerateRequest, profile?: HandProfile): KnotDrills {
   const result = generateDrills(passage, { families: req.families, options: req.options, profile, seed: req.seed ?? 1 });
   const keys = drillKeys(result.drills);
-  return { drills: result.drills.map((drill, i) => ({ drill, key: keys[i] })), skipped: result.skipped };
+  return { drills: result.drills.map((drill, i) => ({ drill, key: keys[i] })), skipped: result.skipped, profile: profile ?? DEFAULT_PROFILE };
 }
 
 /** The generate handler's JSON body. */

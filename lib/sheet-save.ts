@@ -37,7 +37,7 @@ export function pickedDrills(out: KnotDrills, picks: SaveSheetRequest["drills"])
     const fingering = Object.values(drill.fingeringSource);
     const span = (h: "right" | "left") => {
       const s = drill.maxSpan[h];
-      return s ? { semitones: s.semitones, mm: Math.round(s.mm) } : undefined;
+      return s ? { semitones: s.semitones, mm: Math.round(s.mm), overComfortable: s.overComfortable, overPractical: s.overPractical } : undefined;
     };
     return {
       family: drill.family,
@@ -48,6 +48,7 @@ export function pickedDrills(out: KnotDrills, picks: SaveSheetRequest["drills"])
       musicxml: writeMusicXML(drill.score),
       meta: {
         maxSpan: { right: span("right"), left: span("left") },
+        ...(out.profile ? { profile: { spanMm: out.profile.spanMm, octaveMm: out.profile.octaveMm } } : {}),
         warnings: drill.warnings.map((w) => w.message),
         tempo: { start: Math.min(p.tempo.start, p.tempo.target), target: Math.max(p.tempo.start, p.tempo.target) },
         hands: drill.hands,

@@ -65,7 +65,12 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
       <Caution />
       <ol className="flex flex-col gap-5" aria-label="Drills in order">
         {sheet.drills.map((d, i) => {
-          const playback = playbackOf(readScore(d.musicxml).score);
+          let playback: ReturnType<typeof playbackOf> | null = null;
+          try {
+            playback = playbackOf(readScore(d.musicxml).score);
+          } catch {
+            playback = null;
+          }
           const tempo = d.meta.tempo ?? { start: 60, target: 80 };
           return (
             <li key={d.id} data-testid="sheet-drill" className="grid gap-4 rounded-[var(--radius-card)] border border-line bg-card p-4 lg:grid-cols-[minmax(0,1.6fr)_minmax(0,1fr)]">
@@ -75,7 +80,13 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
                   <span data-testid="sheet-drill-title">{d.title}</span>
                 </h2>
                 <DrillEngraving musicxml={d.musicxml} label={`${d.title}: engraved drill`} />
-                <DrillPlayer playback={playback} bpm={tempo.start} title={d.title} />
+                {playback ? (
+                  <DrillPlayer playback={playback} bpm={tempo.start} title={d.title} />
+                ) : (
+                  <p role="alert" data-testid="drill-unreadable" className="rounded-xl bg-madder-soft px-3 py-2 text-sm text-madder">
+                    This drill&apos;s stored notation could not be read, so it cannot be played here. Download its MusicXML or generate the sheet again.
+                  </p>
+                )}
               </div>
               <div className="flex flex-col gap-3">
                 <p className="rounded-xl bg-sage-soft px-3 py-2 font-mono text-sm text-ink" data-testid="tempo-goal">
@@ -95,7 +106,7 @@ export default async function SheetPage({ params }: { params: Promise<{ sheetId:
                 )}
                 <DrillFacts
                   maxSpan={d.meta.maxSpan}
-                  overSpan={(d.meta.warnings ?? []).some((w) => /comfortable span/.test(w))}
+                  overSpan={Boolean(d.meta.maxSpan?.right?.overComfortable || d.meta.maxSpan?.left?.overComfortable)}
                   estimatedFingering={(d.meta.fingeringSource?.estimated ?? 0) > 0}
                   warnings={d.meta.warnings ?? []}
                 />
