@@ -3,14 +3,12 @@
  * saved sheet drill is built from. One place turns a `Drill` (or a stored MusicXML score) into it.
  */
 import type { Drill, SpanReport } from "./drills/types";
+import { playbackEvents, type ScorePlayback } from "./playback";
 import type { Score } from "./score/types";
 import { writeMusicXML } from "./score/write";
 
-export interface PlaybackData {
-  events: { midi: number; onsetQ: number; durationQ: number; velocity: number }[];
-  beatsPerBar: number;
-  beatUnitQ: number;
-}
+/** A drill's notes to sound and its metre (see lib/playback). */
+export type PlaybackData = Pick<ScorePlayback, "events" | "beatsPerBar" | "beatUnitQ">;
 
 export interface DrillDto {
   /** Stable within one generate request: family, variant and running number. */
@@ -32,17 +30,10 @@ export interface DrillDto {
   playback: PlaybackData;
 }
 
-/** Notes to sound (ties merged by skipping continuations, grace notes left out) and the metre. */
+/** Notes to sound (tied notes as one note of their full length) and the metre. */
 export function playbackOf(score: Score): PlaybackData {
-  const first = score.measures[0];
-  const origin = first ? first.start.valueOf() : 0;
-  return {
-    events: score.events
-      .filter((e) => e.pitch && !e.grace && e.tie !== "stop" && e.tie !== "continue")
-      .map((e) => ({ midi: e.pitch!.midi, onsetQ: e.onset.valueOf() - origin, durationQ: e.duration.valueOf(), velocity: 0.7 })),
-    beatsPerBar: first?.time.beats ?? 4,
-    beatUnitQ: first ? 4 / first.time.beatType : 1,
-  };
+  const { events, beatsPerBar, beatUnitQ } = playbackEvents(score);
+  return { events, beatsPerBar, beatUnitQ };
 }
 
 /** Drill keys for a generated list: `family:variant:n`, n counting repeats of the same pair. */

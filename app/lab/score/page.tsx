@@ -1,6 +1,7 @@
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import { notFound } from "next/navigation";
+import { playbackEvents } from "@/lib/playback";
 import { readScore } from "@/lib/score/read";
 import { LabScore, type LabPiece } from "./lab-score";
 import { LAB_DRILL_XML } from "./lab-drill";
@@ -17,19 +18,16 @@ export default async function ScoreLabPage({ searchParams }: { searchParams: Pro
   const name = PIECES.find((p) => p === asked) ?? PIECES[0];
   const musicxml = await readFile(path.join(process.cwd(), "fixtures", "pieces", `${name}.musicxml`), "utf8");
   const { score } = readScore(musicxml);
-  const first = score.measures[0];
-  const bar1 = score.measures.find((m) => !m.implicit) ?? first;
+  const p = playbackEvents(score);
   const piece: LabPiece = {
     name,
     musicxml,
-    bpm: score.measures.find((m) => m.tempo)?.tempo ?? 96,
-    beatsPerBar: first.time.beats,
-    beatUnitQ: 4 / first.time.beatType,
-    barAnchorQ: bar1.start.valueOf(),
-    bars: score.measures.map((m) => ({ number: Number.isFinite(Number(m.number)) ? Number(m.number) : m.index + 1, startQ: m.start.valueOf() })),
-    events: score.events
-      .filter((e) => e.pitch && !e.grace && e.tie !== "stop" && e.tie !== "continue")
-      .map((e) => ({ midi: e.pitch!.midi, onsetQ: e.onset.valueOf(), durationQ: e.duration.valueOf(), velocity: 0.7 })),
+    bpm: score.measures.find((m) => m.tempo) ? p.initialBpm : 96,
+    beatsPerBar: p.beatsPerBar,
+    beatUnitQ: p.beatUnitQ,
+    barAnchorQ: p.barAnchorQ,
+    bars: p.bars,
+    events: p.events,
   };
   return (
     <main className="mx-auto flex max-w-6xl flex-col gap-6 p-4">

@@ -1,5 +1,6 @@
 import { difficultyMap, hardestBars } from "@/lib/drills";
-import { readScore, toPerformance } from "@/lib/score";
+import { playbackEvents } from "@/lib/playback";
+import { readScore } from "@/lib/score";
 import type { PieceWorkspaceData } from "@/components/pieces/piece-workspace-types";
 
 /** Printed bar number of a measure as an integer (the number a knot stores); index + 1 when not numeric. */
@@ -11,9 +12,7 @@ export function printedBar(number: string, index: number): number {
 /** Everything the piece page's client part needs, computed on the server from the cleaned copy. */
 export function pieceWorkspaceData(musicxml: string): PieceWorkspaceData {
   const { score } = readScore(musicxml);
-  const perf = toPerformance(score);
-  const first = score.measures[0]!;
-  const bar1 = score.measures.find((m) => !m.implicit) ?? first;
+  const playback = playbackEvents(score);
   const heat = difficultyMap(score);
   return {
     musicxml,
@@ -27,12 +26,6 @@ export function pieceWorkspaceData(musicxml: string): PieceWorkspaceData {
     })),
     heat,
     hardest: hardestBars(score, 6).map((h) => ({ measure: h.measure, number: h.number, hand: h.hand, score: h.score, reasons: h.reasons })),
-    playback: {
-      bpm: Math.round(perf.bpm),
-      beatsPerBar: first.time.beats,
-      beatUnitQ: 4 / first.time.beatType,
-      barAnchorQ: bar1.start.valueOf(),
-      events: perf.notes.map((n) => ({ midi: n.midi, onsetQ: n.startQuarters, durationQ: n.quarters, velocity: n.velocity, staff: n.staff })),
-    },
+    playback: { bpm: playback.initialBpm, beatsPerBar: playback.beatsPerBar, beatUnitQ: playback.beatUnitQ, barAnchorQ: playback.barAnchorQ, events: playback.events },
   };
 }
