@@ -160,6 +160,8 @@ export interface SheetDrillMeta {
   /** The hand profile the drill was generated (and its span measured) for. */
   profile?: { spanMm: number; octaveMm: number };
   warnings?: string[];
+  /** Per entry of `warnings`: its kind ("span", "range", …), so readers can tell span warnings apart. */
+  warningCodes?: string[];
   tempo?: { start: number; target: number };
   hands?: "right" | "left" | "both";
   fingeringSource?: { score: number; estimated: number };

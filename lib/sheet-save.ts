@@ -50,6 +50,7 @@ export function pickedDrills(out: KnotDrills, picks: SaveSheetRequest["drills"])
         maxSpan: { right: span("right"), left: span("left") },
         ...(out.profile ? { profile: { spanMm: out.profile.spanMm, octaveMm: out.profile.octaveMm } } : {}),
         warnings: drill.warnings.map((w) => w.message),
+        warningCodes: drill.warnings.map((w) => w.code),
         tempo: { start: Math.min(p.tempo.start, p.tempo.target), target: Math.max(p.tempo.start, p.tempo.target) },
         hands: drill.hands,
         fingeringSource: {

@@ -10,12 +10,15 @@ export type Paper = (typeof PAPER_SIZES)[number];
 
 const tempo = z.number().int().min(20).max(320);
 
+/** Longest drill warning text (all of a drill's warnings, one a line) a handout takes. */
+export const HANDOUT_WARNING_MAX = 2000;
+
 export const HandoutDrillSchema = z.object({
   title: z.string().trim().min(1).max(200),
   musicxml: z.string().min(1),
   studentNote: z.string().max(2000),
   tempo: z.object({ start: tempo, target: tempo }),
-  spanWarning: z.string().max(500).optional(),
+  spanWarning: z.string().max(HANDOUT_WARNING_MAX).optional(),
 });
 
 export const HandoutInputSchema = z.object({

@@ -1,16 +1,16 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { Caution } from "@/components/drills/caution";
 import { PrintHandoutButton } from "@/components/handout/print-handout-button";
 import { Card, PageHeader } from "@/components/ui/card";
 import { db } from "@/db";
-import { getAssignment } from "@/db/queries/assignments";
 import { listPracticeEntries } from "@/db/queries/practice";
-import { HANDOUT_CAUTION } from "@/lib/handout/input";
 import { requireStudent } from "@/lib/session";
 import { utcDay } from "../../practice-input";
 import { drillPlayback } from "./drill-playback";
 import { PracticeForm } from "./practice-form";
 import { SheetDrills, type StudentDrill } from "./sheet-drills";
+import { loadStudentSheet } from "./student-sheet-data";
 
 export const metadata: Metadata = { title: "Drill sheet" };
 export const dynamic = "force-dynamic";
@@ -19,19 +19,10 @@ export const dynamic = "force-dynamic";
 export default async function StudentSheetPage({ params }: { params: Promise<{ assignmentId: string }> }) {
   const ctx = await requireStudent();
   const { assignmentId } = await params;
-  const a = await getAssignment(db, ctx.studioId, assignmentId, ctx.membershipId);
-  if (!a) notFound();
-  const goals = a.assignment.tempoGoals;
-  const drills: StudentDrill[] = a.drills.map((d) => ({
-    id: d.id,
-    title: d.title,
-    musicxml: d.musicxml,
-    studentNote: d.studentNote,
-    goal: goals[d.id] ?? d.meta.tempo?.target ?? null,
-    start: d.meta.tempo?.start ?? null,
-    warnings: d.meta.warnings ?? [],
-    playback: drillPlayback(d.musicxml),
-  }));
+  const data = await loadStudentSheet(db, ctx.studioId, assignmentId, ctx.membershipId);
+  if (!data) notFound();
+  const a = data.assignment;
+  const drills: StudentDrill[] = data.drills.map((d) => ({ ...d, playback: drillPlayback(d.musicxml) }));
   const entries = (await listPracticeEntries(db, ctx.studioId, { studentMembershipId: ctx.membershipId, assignmentId })).reverse();
   const sheetId = a.assignment.sheetId;
   return (
@@ -51,9 +42,7 @@ export default async function StudentSheetPage({ params }: { params: Promise<{ a
       </nav>
       <section aria-labelledby="drills-heading" className="flex flex-col gap-3">
         <h2 id="drills-heading" className="text-xl">Drills</h2>
-        <p className="rounded-xl border border-rosin/40 bg-rosin-soft px-4 py-3 text-sm" role="note" data-testid="caution">
-          <strong>Caution.</strong> {HANDOUT_CAUTION}
-        </p>
+        <Caution />
         <SheetDrills drills={drills} />
       </section>
       <section aria-labelledby="log-heading">

@@ -15,6 +15,8 @@ export interface StudentDrill {
   studentNote: string | null;
   goal: number | null;
   start: number | null;
+  /** Stretches over this student's comfortable span (re-measured for their hand). */
+  spanWarnings: string[];
   warnings: string[];
   playback: { events: PlaybackEvent[]; beatsPerBar: number; beatUnitQ: number } | null;
 }
@@ -31,6 +33,14 @@ export function SheetDrills({ drills }: { drills: StudentDrill[] }) {
           </div>
           <DrillPreview musicxml={d.musicxml} label={d.title} className="mt-3" />
           {d.studentNote ? <p className="mt-3 text-sm">{d.studentNote}</p> : null}
+          {d.spanWarnings.length > 0 ? (
+            <div role="alert" data-testid="span-warning" className="mt-3 rounded-xl border border-madder/50 bg-madder-soft px-3 py-2 text-sm text-madder">
+              <strong>Too wide for your hand.</strong>
+              <ul className="mt-1 list-disc pl-5">
+                {d.spanWarnings.map((w) => <li key={w}>{w}</li>)}
+              </ul>
+            </div>
+          ) : null}
           {d.warnings.map((w) => <p key={w} className="mt-2 text-sm text-madder">{w}</p>)}
           {d.playback ? (
             <Player
