@@ -1,5 +1,5 @@
 import { db } from "@/db";
-import { getSheet, sheetStudio } from "@/db/queries/sheets";
+import { getSheet } from "@/db/queries/sheets";
 import { apiMember, notFoundResponse } from "@/lib/api-session";
 import { downloadResponse, sheetZip } from "@/lib/drill-files";
 import { canReadSheet } from "@/lib/sheet-access";
@@ -12,8 +12,8 @@ export async function GET(_request: Request, { params }: { params: Promise<{ she
   if (ctx instanceof Response) return ctx;
   const { sheetId } = await params;
   if (!(await canReadSheet(ctx, sheetId))) return notFoundResponse();
-  const studioId = await sheetStudio(db, sheetId);
-  const sheet = studioId ? await getSheet(db, studioId, sheetId) : null;
+  // canReadSheet has checked the sheet is in the member's studio; read it scoped to that studio.
+  const sheet = await getSheet(db, ctx.studioId, sheetId);
   if (!sheet) return notFoundResponse();
   return downloadResponse(sheetZip(sheet.title, sheet.drills));
 }
