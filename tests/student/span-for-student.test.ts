@@ -123,3 +123,21 @@ describe("handout text (read with pdfjs-dist)", () => {
     expect(text).not.toContain(squash("semitones"));
   });
 });
+
+describe("assign form: drills too wide per student", () => {
+  test("the tenth is listed for the 178 mm student only; a student with no profile is checked against the default hand", async () => {
+    const { getSheet } = await import("@/db/queries/sheets");
+    const { overSpanByStudent } = await import("../../app/(teacher)/assignments/student-fit");
+    const sheet = await getSheet(t.db, f.studioId, sheetId);
+    const fit = overSpanByStudent(sheet!.drills, [
+      { membershipId: "small", ...SMALL },
+      { membershipId: "large", ...LARGE },
+      { membershipId: "none", spanMm: null, octaveMm: null },
+    ]);
+    expect(fit.small!.map((o) => o.label)).toEqual([`1. ${TITLE}`]);
+    expect(fit.small![0]!.stretches).toEqual(["RH 16 semitones / 212 mm"]);
+    expect(fit.large).toEqual([]);
+    // hand.ts DEFAULT_PROFILE: the 7.9 in hand reaches a ninth at full stretch but not a tenth comfortably.
+    expect(fit.none!.length).toBe(1);
+  });
+});

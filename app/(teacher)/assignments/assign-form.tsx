@@ -5,6 +5,7 @@ import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/field";
 import { assignSheetFormAction } from "./actions";
 import { tempoGoalName } from "./assignment-form-data";
+import type { OverSpan } from "./student-fit";
 
 const inputClass = "rounded-xl border border-line bg-card px-3 py-2 text-base outline-none focus:border-walnut";
 /** Fields that show their own messages; any other field's message joins the form's message. */
@@ -18,10 +19,12 @@ function FieldError({ messages }: { messages?: string[] }) {
  * Assign one sheet to students with a due date and a tempo goal per drill. A plain form: the server
  * action checks it with the assignment schema and answers with a message per field.
  */
-export function AssignForm({ sheet, students, today }: {
+export function AssignForm({ sheet, students, today, overSpan = {} }: {
   sheet: { id: string; drills: { id: string; title: string; target: number | null }[] };
   students: { membershipId: string; name: string }[];
   today: string;
+  /** Per student: the drills too wide for their hand (checked on the server). Assigning still works. */
+  overSpan?: Record<string, OverSpan[]>;
 }) {
   const router = useRouter();
   const formRef = useRef<HTMLFormElement>(null);
@@ -54,12 +57,25 @@ export function AssignForm({ sheet, students, today }: {
       <fieldset>
         <legend className="text-sm font-bold text-walnut">Students</legend>
         <div className="mt-1 flex flex-wrap gap-2">
-          {students.map((s) => (
-            <label key={s.membershipId} className="flex items-center gap-1.5 rounded-full border border-line bg-card px-3 py-1.5 text-sm">
-              <input type="checkbox" name="studentMembershipIds" value={s.membershipId} /> {s.name}
-            </label>
-          ))}
+          {students.map((s) => {
+            const over = overSpan[s.membershipId] ?? [];
+            return (
+              <div key={s.membershipId} className="flex flex-col gap-1">
+                <label className="flex items-center gap-1.5 rounded-full border border-line bg-card px-3 py-1.5 text-sm">
+                  <input type="checkbox" name="studentMembershipIds" value={s.membershipId} /> {s.name}
+                </label>
+                {over.length > 0 ? (
+                  <ul data-testid="student-over-span" aria-label={`Drills too wide for ${s.name}`} className="max-w-xs pl-3 text-xs text-madder">
+                    {over.map((o) => <li key={o.drillId}>Too wide for {s.name}&apos;s hand: {o.label} ({o.stretches.join(", ")})</li>)}
+                  </ul>
+                ) : null}
+              </div>
+            );
+          })}
         </div>
+        {Object.values(overSpan).some((l) => l.length > 0) ? (
+          <p className="mt-1 text-xs text-muted">You can still assign; those students see the warning on their sheet and handout.</p>
+        ) : null}
         <FieldError messages={errors.studentMembershipIds} />
       </fieldset>
       <label className="flex flex-col gap-1 text-sm font-bold text-walnut">

@@ -10,6 +10,7 @@ import { listStudents } from "@/db/queries/students";
 import { requireTeacher } from "@/lib/session";
 import { utcDay } from "../../(student)/my/practice-input";
 import { AssignForm } from "./assign-form";
+import { overSpanByStudent } from "./student-fit";
 
 export const metadata: Metadata = { title: "Assignments" };
 export const dynamic = "force-dynamic";
@@ -43,6 +44,7 @@ export default async function AssignmentsPage({ searchParams }: { searchParams: 
           <AssignForm
             sheet={{ id: chosen.id, drills: chosen.drills.map((d) => ({ id: d.id, title: d.title, target: d.meta.tempo?.target ?? null })) }}
             students={students.map((s) => ({ membershipId: s.membershipId, name: s.name }))}
+            overSpan={overSpanByStudent(chosen.drills, students)}
             today={utcDay()}
           />
         </Card>
