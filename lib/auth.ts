@@ -6,6 +6,7 @@ import * as schema from "../db/schema";
 import { authSecret, readEnv } from "./env";
 import { resetPasswordMail, sendMail } from "./mail";
 import { signInLimitHooks } from "./sign-in-limit";
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
 const env = readEnv();
 
@@ -19,9 +20,8 @@ function localTwins(baseURL: string): string[] {
   return [url.origin, twin.origin];
 }
 
-/** Shortest password Knotwork accepts; the sign-up form and invitation form share it. */
-export const MIN_PASSWORD_LENGTH = 8;
-export const MAX_PASSWORD_LENGTH = 128;
+/** Password limits, re-exported for server code that already imports auth (see password-rules). */
+export { MIN_PASSWORD_LENGTH, MAX_PASSWORD_LENGTH };
 /** How long the signed session copy in the browser is trusted without a database look-up. */
 export const SESSION_COOKIE_CACHE_SECONDS = 5 * 60;
 

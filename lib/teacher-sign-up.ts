@@ -4,14 +4,12 @@ import { z } from "zod";
 import type { Db } from "../db";
 import { account, membership, studio, user } from "../db/schema";
 import { fail, fromZodError, ok, type ActionResult } from "./action-result";
-
-export const MIN_PASSWORD = 8;
-export const MAX_PASSWORD = 128;
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
 export const PasswordField = z
   .string({ error: "Password is required." })
-  .min(MIN_PASSWORD, { error: `Password must be at least ${MIN_PASSWORD} characters.` })
-  .max(MAX_PASSWORD, { error: `Password must be at most ${MAX_PASSWORD} characters.` });
+  .min(MIN_PASSWORD_LENGTH, { error: `Password must be at least ${MIN_PASSWORD_LENGTH} characters.` })
+  .max(MAX_PASSWORD_LENGTH, { error: `Password must be at most ${MAX_PASSWORD_LENGTH} characters.` });
 
 export const NameField = z
   .string({ error: "Name is required." })

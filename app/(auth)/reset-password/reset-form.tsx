@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
 import { authRequest } from "@/lib/auth-request";
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/password-rules";
 
 /** Sets a new password with the token from the reset e-mail. */
 export function ResetForm({ token }: { token: string }) {
@@ -11,7 +12,8 @@ export function ResetForm({ token }: { token: string }) {
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const newPassword = String(new FormData(e.currentTarget).get("password") ?? "");
-    if (newPassword.length < 8) return setState({ status: "idle", error: "At least 8 characters, please." });
+    if (newPassword.length < MIN_PASSWORD_LENGTH) return setState({ status: "idle", error: `At least ${MIN_PASSWORD_LENGTH} characters, please.` });
+    if (newPassword.length > MAX_PASSWORD_LENGTH) return setState({ status: "idle", error: `At most ${MAX_PASSWORD_LENGTH} characters, please.` });
     setState({ status: "saving" });
     const answer = await authRequest("reset-password", { newPassword, token });
     setState(!answer.ok ? { status: "idle", error: "This reset link is no longer valid. Ask for a new one." } : { status: "done" });
@@ -22,7 +24,7 @@ export function ResetForm({ token }: { token: string }) {
   return (
     <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
       <FormMessage message={state.error} />
-      <Field label="New password" name="password" type="password" autoComplete="new-password" hint="At least 8 characters." required />
+      <Field label="New password" name="password" type="password" autoComplete="new-password" hint={`At least ${MIN_PASSWORD_LENGTH} characters.`} required />
       <Button type="submit" disabled={state.status === "saving"}>Save new password</Button>
     </form>
   );
