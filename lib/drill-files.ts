@@ -22,15 +22,18 @@ export interface DownloadFile {
   filename: string;
 }
 
-/** A file-name stem from a title: lower-case words joined by hyphens. */
+/**
+ * A file-name stem from a title: lower-case ASCII words joined by hyphens, at most 60 characters,
+ * or `fallback` when nothing is left. The one slug for every download name (drills, zips, handouts).
+ */
 export function fileStem(title: string, fallback = "drill"): string {
   const stem = title
     .normalize("NFKD")
     .replace(/[^\w\s-]/g, "")
-    .trim()
     .toLowerCase()
     .replace(/[\s_-]+/g, "-")
-    .slice(0, 60);
+    .slice(0, 60)
+    .replace(/^-+|-+$/g, "");
   return stem || fallback;
 }
 
