@@ -52,7 +52,7 @@ export const auth = betterAuth({
     window: env.AUTH_RATE_LIMIT_WINDOW,
     max: env.AUTH_RATE_LIMIT_MAX,
     customRules: {
-      "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: 10 },
+      "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: env.AUTH_SIGN_IN_MAX },
     },
   },
   // Per-account limit on failed sign-ins, whatever address the client claims (lib/sign-in-limit.ts).

@@ -11,6 +11,8 @@ const EnvSchema = z.object({
   BETTER_AUTH_URL: z.url().default("http://localhost:3000"),
   AUTH_RATE_LIMIT_WINDOW: z.coerce.number().int().positive().default(60),
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(60),
+  /** Sign-in attempts per window from one address (on top of the per-account limit). */
+  AUTH_SIGN_IN_MAX: z.coerce.number().int().positive().default(10),
   UPLOADTHING_TOKEN: z.string().optional(),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Knotwork <no-reply@knotwork.test>"),

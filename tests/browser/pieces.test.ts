@@ -216,7 +216,7 @@ describe("pieces in the browser", () => {
       await shoot(page, `piece-${width}`);
       // Picking a hardest bar selects it in the score.
       await page.getByRole("heading", { name: "Hardest bars" }).locator("xpath=..").getByRole("button").first().click();
-      expect(await page.locator('[data-selected="true"]').count()).toBeGreaterThan(0);
+      await expect.poll(() => page.locator('[data-selected="true"]').count()).toBeGreaterThan(0);
       await page.setViewportSize({ width, height: 900 });
       await page.screenshot({ path: `${screenshotDir}/piece-selected-${width}.png` });
 
