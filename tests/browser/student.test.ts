@@ -5,6 +5,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { CAUTION } from "@/lib/caution";
 import { describeViolations, seriousViolations } from "./axe";
 import { launchChromium, shoot } from "./chromium";
+import { DEMO_SHEET_TITLE } from "@/db/demo-sheet";
 
 const baseURL = inject("baseURL");
 const NEW_STUDENT = { name: "Pia Newcomb", email: "pia.newcomb@knotwork.test", password: "scales-every-day" };
@@ -76,7 +77,7 @@ describe("from teacher to student", () => {
     const { page } = teacher;
     await page.goto("/assignments");
     // other browser tests may have saved newer sheets: choose the demo sheet by name
-    const demoSheet = page.getByRole("navigation", { name: "Other sheets" }).getByRole("link", { name: /Even triplets/ });
+    const demoSheet = page.getByRole("navigation", { name: "Other sheets" }).getByRole("link", { name: DEMO_SHEET_TITLE, exact: true });
     if (await demoSheet.count()) {
       await demoSheet.first().click();
       await page.waitForURL(/sheet=/);
@@ -100,7 +101,7 @@ describe("from teacher to student", () => {
   test("the student sees the assigned sheet engraved, with goals and the caution, and logs practice", async () => {
     const { page } = student;
     await page.goto("/my");
-    const open = page.getByRole("link", { name: /Even triplets/ }).first();
+    const open = page.getByRole("link", { name: new RegExp(DEMO_SHEET_TITLE) }).first();
     assignmentPath = (await open.getAttribute("href"))!;
     expect(assignmentPath).toMatch(/^\/my\/assignments\//);
     await open.click();
