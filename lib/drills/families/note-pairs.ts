@@ -97,7 +97,10 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
             family: "note-pairs",
             variant: `pair-${i + 1}`,
             title: `Note pairs ${label(A)} → ${label(B)}${all.length > 1 ? ` (${shown.length} of ${all.length})` : ""}${hands.length > 1 ? `, ${hand} hand` : ""}`,
-            teacherNote: `Each small cell isolates one connection between the two positions: ${shown.length} of the ${all.length} possible cells, the simplest first.`,
+            teacherNote:
+              all.length > 1
+                ? `Each small cell isolates one connection between the two positions: ${shown.length} of the ${all.length} possible cells, the simplest first.`
+                : "The one connection between these two notes, repeated until the move is secure.",
             studentNote: "Play each cell slowly and evenly as written, rest, then the next. Keep the fingers close to the keys.",
             hands: hand,
             segments: [{ [hand]: slots }],
