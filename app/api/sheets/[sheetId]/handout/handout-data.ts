@@ -6,6 +6,7 @@ import type { HandoutInput, Paper } from "@/lib/handout";
 import { HANDOUT_WARNING_MAX } from "@/lib/handout/input";
 import { drillWarningsFor, profileOrDefault } from "@/lib/student-span";
 import type { StudioContext } from "@/lib/session";
+import { fileStem } from "@/lib/drill-files";
 
 /** Tempo limits the handout accepts (its zod schema). */
 const MIN_TEMPO = 20;
@@ -36,14 +37,7 @@ export function barsLabel(src: { fromBar: number; toBar: number; hand: keyof typ
 
 /** A file name for the handout: the sheet title in lower-case ASCII words. */
 export function handoutFileName(title: string, paper: Paper): string {
-  const slug = title
-    .normalize("NFKD")
-    .replace(/[^\w\s-]/g, "")
-    .trim()
-    .toLowerCase()
-    .replace(/[\s_]+/g, "-")
-    .slice(0, 60);
-  return `${slug || "drill-sheet"}-${paper}.pdf`;
+  return `${fileStem(title, "drill-sheet")}-${paper}.pdf`;
 }
 
 /**
