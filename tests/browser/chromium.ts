@@ -3,8 +3,8 @@ import path from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { repoRoot } from "./server";
 
-/** Debian chromium driven by playwright-core (flags from the project's stack notes). */
-export async function launchChromium(): Promise<Browser> {
+/** Debian chromium driven by playwright-core (flags from the project's stack notes), plus any extra flags. */
+export async function launchChromium(extraArgs: readonly string[] = []): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
@@ -17,6 +17,7 @@ export async function launchChromium(): Promise<Browser> {
       "--disable-background-networking",
       "--disable-component-update",
       "--disable-sync",
+      ...extraArgs,
     ],
   });
 }

@@ -41,7 +41,7 @@ export default async function setup(project: TestProject) {
     AUTH_SIGN_IN_MAX: "1000",
   };
   run(path.join(repoRoot, "node_modules/.bin/tsx"), ["db/seed.ts"], env);
-  const child = startNext(port, env);
+  const child = startNext(port, env, "inherit");
   await waitForHealth(url, child);
   project.provide("baseURL", url);
   project.provide("databaseFile", path.join(dir, "browser.db"));

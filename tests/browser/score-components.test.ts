@@ -1,27 +1,13 @@
 import fs from "node:fs";
 import { afterAll, beforeAll, describe, expect, inject, test } from "vitest";
-import { chromium, type Browser, type Page } from "playwright-core";
-import { shoot } from "./chromium";
+import { type Browser, type Page } from "playwright-core";
+import { launchChromium, shoot } from "./chromium";
 
 const baseURL = inject("baseURL");
 let browser: Browser;
 
 beforeAll(async () => {
-  browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: [
-      "--headless",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--no-first-run",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-      "--autoplay-policy=no-user-gesture-required",
-    ],
-  });
+  browser = await launchChromium(["--autoplay-policy=no-user-gesture-required"]);
 });
 afterAll(async () => {
   await browser?.close();

@@ -5,20 +5,14 @@
  * engraving and playback must work, and the page must report no policy violation.
  */
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { type Browser, type BrowserContext, type Page } from "playwright-core";
 import { baseURL, cookies, ids } from "./context";
+import { launchChromium } from "../browser/chromium";
 
 let browser: Browser;
 
 beforeAll(async () => {
-  browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    headless: true,
-    args: [
-      "--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
-      "--disable-component-update", "--disable-sync", "--autoplay-policy=no-user-gesture-required",
-    ],
-  });
+  browser = await launchChromium(["--autoplay-policy=no-user-gesture-required"]);
 });
 afterAll(async () => {
   await browser?.close();
