@@ -21,6 +21,8 @@ export interface MailMessage {
 export interface SentMail {
   id: string;
   delivered: boolean;
+  /** Why SMTP delivery failed; the message stays in the outbox unsent. */
+  error?: string;
 }
 
 let cached: { url: string; transport: Transporter } | null = null;
@@ -47,13 +49,19 @@ export async function sendMail(message: MailMessage, database: Db = sharedDb): P
     html: message.html ?? null,
   });
   if (!env.SMTP_URL) return { id, delivered: false };
-  await smtpTransport(env.SMTP_URL).sendMail({
-    from: env.MAIL_FROM,
-    to: message.to,
-    subject: message.subject,
-    text: message.text,
-    html: message.html,
-  });
+  // The rows the mail belongs to are already stored: a failed delivery is reported, never thrown,
+  // so a retry by the teacher cannot store them twice.
+  try {
+    await smtpTransport(env.SMTP_URL).sendMail({
+      from: env.MAIL_FROM,
+      to: message.to,
+      subject: message.subject,
+      text: message.text,
+      html: message.html,
+    });
+  } catch (error) {
+    return { id, delivered: false, error: error instanceof Error ? error.message : String(error) };
+  }
   await database.update(outbox).set({ sentAt: new Date() }).where(eq(outbox.id, id));
   return { id, delivered: true };
 }

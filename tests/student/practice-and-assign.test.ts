@@ -1,5 +1,6 @@
 // Server-side checks behind the student's practice form, the assign form and the invite form:
 // bad input gets a clear message and nothing is stored (row counts unchanged).
+import net from "node:net";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { countRows, useTempDatabase } from "../db/temp-db";
 import { buildStudio, type StudioFixture } from "./studio-fixture";
@@ -11,6 +12,16 @@ let assignSheet: typeof import("../../app/(teacher)/assignments/assign-sheet").a
 let ops: typeof import("../../app/(teacher)/students/student-ops");
 
 const ORIGIN = "http://localhost:3000";
+
+/** A loopback port nobody listens on: an SMTP connection to it is refused at once. */
+function closedPort(): Promise<number> {
+  return new Promise((resolve) => {
+    const srv = net.createServer().listen(0, "127.0.0.1", () => {
+      const port = (srv.address() as net.AddressInfo).port;
+      srv.close(() => resolve(port));
+    });
+  });
+}
 const today = () => new Date().toISOString().slice(0, 10);
 const student = (i: 0 | 1) => ({ role: "student" as const, studioId: f.studioId, membershipId: f.students[i].membershipId });
 const teacher = () => ({
@@ -79,6 +90,24 @@ describe("assignSheet", () => {
     tempoGoals: { [f.drillIds[1]]: 90 }, ...over,
   });
 
+  test("a failed SMTP delivery is reported, the assignment is stored once and the mail waits in the outbox", async () => {
+    const port = await closedPort();
+    const [a0, o0] = [await countRows(t.client, "assignment"), await countRows(t.client, "outbox")];
+    process.env.SMTP_URL = `smtp://127.0.0.1:${port}`;
+    try {
+      const r = await assignSheet(t.db, teacher(), input(), ORIGIN);
+      expect(r.ok).toBe(true);
+      if (!r.ok) return;
+      expect(r.data.undelivered).toEqual([f.students[1].email]);
+    } finally {
+      delete process.env.SMTP_URL;
+    }
+    expect(await countRows(t.client, "assignment")).toBe(a0 + 1);
+    expect(await countRows(t.client, "outbox")).toBe(o0 + 1);
+    const unsent = await t.client.execute("SELECT sent_at FROM outbox ORDER BY created_at DESC LIMIT 1");
+    expect(unsent.rows[0].sent_at).toBeNull();
+  });
+
   test("assigns in one go and mails each student the link to their sheet", async () => {
     const [a0, o0] = [await countRows(t.client, "assignment"), await countRows(t.client, "outbox")];
     const r = await assignSheet(t.db, teacher(), input({ studentMembershipIds: f.students.map((s) => s.membershipId) }), ORIGIN);
@@ -118,10 +147,23 @@ describe("assignSheet", () => {
 });
 
 describe("invitations", () => {
+  test("an invitation whose e-mail cannot be delivered is stored once and the teacher is told", async () => {
+    const before = await countRows(t.client, "invitation");
+    process.env.SMTP_URL = `smtp://127.0.0.1:${await closedPort()}`;
+    try {
+      const r = await ops.inviteStudent(t.db, teacher(), { email: "unreachable.pupil@knotwork.test" }, ORIGIN);
+      expect(r.ok && r.data.delivered).toBe(false);
+      expect(r.ok).toBe(true);
+    } finally {
+      delete process.env.SMTP_URL;
+    }
+    expect(await countRows(t.client, "invitation")).toBe(before + 1);
+  });
+
   test("inviting stores an invitation and an outbox mail with the link; the link works once", async () => {
     const o0 = await countRows(t.client, "outbox");
     const r = await ops.inviteStudent(t.db, teacher(), { email: "New.Pupil@knotwork.test" }, ORIGIN);
-    expect(r).toEqual({ ok: true, data: { email: "new.pupil@knotwork.test" } });
+    expect(r).toEqual({ ok: true, data: { email: "new.pupil@knotwork.test", delivered: true } });
     expect(await countRows(t.client, "outbox")).toBe(o0 + 1);
     const row = (await t.client.execute(`SELECT text FROM outbox WHERE "to" = 'new.pupil@knotwork.test'`)).rows[0];
     const token = String(row.text).match(/\/invite\/([\w-]+)/)?.[1];

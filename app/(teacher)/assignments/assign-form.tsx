@@ -47,7 +47,14 @@ export function AssignForm({ sheet, students, today, overSpan = {} }: {
   const other = Object.entries(errors).filter(([k]) => !SHOWN.includes(k)).flatMap(([, m]) => m);
   const message = result
     ? result.ok
-      ? { ok: true, text: `Assigned to ${result.data.ids.length} student${result.data.ids.length === 1 ? "" : "s"}; each got an e-mail with the link.` }
+      ? {
+          ok: true,
+          text:
+            `Assigned to ${result.data.ids.length} student${result.data.ids.length === 1 ? "" : "s"}; ` +
+            (result.data.undelivered.length
+              ? `the e-mail to ${result.data.undelivered.join(", ")} could not be sent and waits in the outbox — share the link from their sheet instead.`
+              : "each got an e-mail with the link."),
+        }
       : { ok: false, text: [result.message, ...other].join(" ") }
     : null;
   return (

@@ -15,7 +15,7 @@ export async function assignSheet(
   ctx: Pick<StudioContext, "role" | "studioId" | "user">,
   raw: unknown,
   origin: string,
-): Promise<ActionResult<{ ids: string[] }>> {
+): Promise<ActionResult<{ ids: string[]; undelivered: string[] }>> {
   if (ctx.role !== "teacher") return fail("Only teachers assign drill sheets.");
   const parsed = AssignmentInput.safeParse(raw);
   if (!parsed.success) return fromZodError(parsed.error);
@@ -41,6 +41,7 @@ export async function assignSheet(
     note: input.note?.trim() ? input.note.trim() : null,
     createdBy: ctx.user.id,
   });
+  const undelivered: string[] = [];
   for (const [i, membershipId] of unique.entries()) {
     const s = students.find((x) => x.membershipId === membershipId)!;
     const mail = assignmentMail({
@@ -50,7 +51,8 @@ export async function assignSheet(
       dueDate: input.dueDate,
       link: `${origin}/my/assignments/${ids[i]}`,
     });
-    await sendMail({ to: s.email, ...mail, studioId: ctx.studioId }, database);
+    const sent = await sendMail({ to: s.email, ...mail, studioId: ctx.studioId }, database);
+    if (sent.error) undelivered.push(s.email);
   }
-  return ok({ ids });
+  return ok({ ids, undelivered });
 }

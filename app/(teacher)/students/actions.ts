@@ -6,7 +6,7 @@ import { readEnv } from "@/lib/env";
 import { requireTeacher } from "@/lib/session";
 import { inviteStudent, updateHandProfile } from "./student-ops";
 
-export type InviteState = ActionResult<{ email: string }> | null;
+export type InviteState = ActionResult<{ email: string; delivered: boolean }> | null;
 
 /** Invite form (progressively enhanced): teacher only, e-mail checked, mail to the outbox or SMTP. */
 export async function inviteStudentAction(_prev: InviteState, form: FormData): Promise<InviteState> {

@@ -15,7 +15,13 @@ export function InviteForm() {
       <Button type="submit" disabled={pending}>{pending ? "Sending…" : "Send invitation"}</Button>
       <div className="sm:basis-full">
         {state && !state.ok && !state.fieldErrors?.email ? <FormMessage message={state.message} /> : null}
-        {state?.ok ? <p role="status" className="text-sm text-sage">Invitation sent to {state.data.email}.</p> : null}
+        {state?.ok ? (
+          state.data.delivered ? (
+            <p role="status" className="text-sm text-sage">Invitation sent to {state.data.email}.</p>
+          ) : (
+            <p role="alert" className="text-sm text-madder">The invitation to {state.data.email} could not be e-mailed; check the mail settings and send it again.</p>
+          )
+        ) : null}
       </div>
     </form>
   );

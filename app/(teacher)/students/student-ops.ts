@@ -12,7 +12,7 @@ import { HandProfileInput, InviteInput } from "./student-inputs";
 type TeacherCtx = Pick<StudioContext, "role" | "studioId" | "studioName" | "user">;
 
 /** Invites a student by e-mail: an invitation row and a mail with the one-time link. */
-export async function inviteStudent(database: Db, ctx: TeacherCtx, raw: unknown, origin: string): Promise<ActionResult<{ email: string }>> {
+export async function inviteStudent(database: Db, ctx: TeacherCtx, raw: unknown, origin: string): Promise<ActionResult<{ email: string; delivered: boolean }>> {
   if (ctx.role !== "teacher") return fail("Only teachers invite students.");
   const parsed = InviteInput.safeParse(raw);
   if (!parsed.success) return fromZodError(parsed.error);
@@ -26,8 +26,8 @@ export async function inviteStudent(database: Db, ctx: TeacherCtx, raw: unknown,
   if (member) return fail("This person is already in your studio.", { email: ["Already a member of your studio."] });
   const invite = await createInvitation({ studioId: ctx.studioId, email, invitedBy: ctx.user.id }, database);
   const mail = invitationMail({ studioName: ctx.studioName, teacherName: ctx.user.name, link: `${origin}/invite/${invite.token}`, expiresAt: invite.expiresAt });
-  await sendMail({ to: email, ...mail, studioId: ctx.studioId }, database);
-  return ok({ email });
+  const sent = await sendMail({ to: email, ...mail, studioId: ctx.studioId }, database);
+  return ok({ email, delivered: !sent.error });
 }
 
 /** Saves a student's hand profile; spans in inches are measured full spans, turned into a comfortable span in mm. */
