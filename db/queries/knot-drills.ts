@@ -3,21 +3,16 @@ import { inStudio } from "../../lib/studio-scope";
 import type { Db } from "../index";
 import { handProfile, membership, passage, score, user } from "../schema";
 import { preparedFor } from "./prepared";
+import { knotColumns } from "./passages";
 
 /** One knot of the studio with its piece's cleaned MusicXML, or null (unknown id or another studio). */
 export async function getKnotSource(database: Db, studioId: string, knotId: string) {
   const [row] = await database
     .select({
-      id: passage.id,
+      ...knotColumns,
       scoreId: passage.scoreId,
       scoreTitle: score.title,
       composer: score.composer,
-      part: passage.part,
-      hand: passage.hand,
-      fromBar: passage.fromBar,
-      toBar: passage.toBar,
-      tags: passage.tags,
-      note: passage.note,
       knotUpdatedAt: passage.updatedAt,
       scoreUpdatedAt: score.updatedAt,
       musicxml: score.musicxml,

@@ -23,19 +23,21 @@ export async function listPassages(database: Db, studioId: string) {
     .orderBy(desc(passage.createdAt));
 }
 
+/** What every knot query returns about the knot itself. */
+export const knotColumns = {
+  id: passage.id,
+  part: passage.part,
+  hand: passage.hand,
+  fromBar: passage.fromBar,
+  toBar: passage.toBar,
+  tags: passage.tags,
+  note: passage.note,
+} as const;
+
 /** The knots marked in one piece of the studio, in bar order. */
 export async function listPassagesForScore(database: Db, studioId: string, scoreId: string) {
   return database
-    .select({
-      id: passage.id,
-      part: passage.part,
-      hand: passage.hand,
-      fromBar: passage.fromBar,
-      toBar: passage.toBar,
-      tags: passage.tags,
-      note: passage.note,
-      createdAt: passage.createdAt,
-    })
+    .select({ ...knotColumns, createdAt: passage.createdAt })
     .from(passage)
     .where(inStudio(passage, studioId, eq(passage.scoreId, scoreId)))
     .orderBy(passage.fromBar, passage.toBar, desc(passage.createdAt));
@@ -44,18 +46,7 @@ export async function listPassagesForScore(database: Db, studioId: string, score
 /** One knot of the studio with its piece's title, or null (unknown id or another studio). */
 export async function getPassage(database: Db, studioId: string, passageId: string) {
   const [row] = await database
-    .select({
-      id: passage.id,
-      scoreId: passage.scoreId,
-      scoreTitle: score.title,
-      part: passage.part,
-      hand: passage.hand,
-      fromBar: passage.fromBar,
-      toBar: passage.toBar,
-      tags: passage.tags,
-      note: passage.note,
-      createdAt: passage.createdAt,
-    })
+    .select({ ...knotColumns, scoreId: passage.scoreId, scoreTitle: score.title, createdAt: passage.createdAt })
     .from(passage)
     .innerJoin(score, and(eq(score.id, passage.scoreId), eq(score.studioId, studioId)))
     .where(inStudio(passage, studioId, eq(passage.id, passageId)))
