@@ -1,6 +1,7 @@
 "use client";
 import dynamic from "next/dynamic";
-import type { PlaybackEvent } from "@/components/score/playback-timeline";
+import type { PlaybackData } from "@/lib/drill-dto";
+import type { StudentDrillData } from "./student-sheet-data";
 
 const DrillPreview = dynamic(() => import("@/components/score/drill-preview").then((m) => m.DrillPreview), {
   ssr: false,
@@ -8,18 +9,8 @@ const DrillPreview = dynamic(() => import("@/components/score/drill-preview").th
 });
 const Player = dynamic(() => import("@/components/score/player").then((m) => m.Player), { ssr: false });
 
-export interface StudentDrill {
-  id: string;
-  title: string;
-  musicxml: string;
-  studentNote: string | null;
-  goal: number | null;
-  start: number | null;
-  /** Stretches over this student's comfortable span (re-measured for their hand). */
-  spanWarnings: string[];
-  warnings: string[];
-  playback: { events: PlaybackEvent[]; beatsPerBar: number; beatUnitQ: number } | null;
-}
+/** A drill as the student sees it, with the notes its player plays. */
+export type StudentDrill = StudentDrillData & { playback: PlaybackData | null };
 
 /** The drills of an assigned sheet: engraving, note, tempo goal and a player for each. */
 export function SheetDrills({ drills }: { drills: StudentDrill[] }) {
