@@ -41,25 +41,18 @@ count() { # $1 = vitest JSON report; prints "passed failed"
 echo "── Type-check"
 if npx tsc --noEmit -p .; then passed=$((passed + 1)); else failed=$((failed + 1)); status=1; fi
 
-echo "── Unit and integration tests"
-rm -f artifacts/vitest-unit.json
-npx vitest run --reporter=default --reporter=json --outputFile=artifacts/vitest-unit.json || status=1
-read -r p f < <(count artifacts/vitest-unit.json)
-passed=$((passed + p)); failed=$((failed + f))
+suite() { # $1 = heading, $2 = report name, $3 = vitest config (empty for the default one)
+  echo "── $1"
+  local report="artifacts/vitest-$2.json"
+  rm -f "$report"
+  npx vitest run ${3:+--config "$3"} --reporter=default --reporter=json --outputFile="$report" || status=1
+  read -r p f < <(count "$report")
+  passed=$((passed + p)); failed=$((failed + f))
+}
 
-echo "── Browser tests"
-rm -f artifacts/vitest-browser.json
-npx vitest run --config vitest.browser.config.ts --reporter=default --reporter=json \
-  --outputFile=artifacts/vitest-browser.json || status=1
-read -r p f < <(count artifacts/vitest-browser.json)
-passed=$((passed + p)); failed=$((failed + f))
-
-echo "── Hardening (production build: hostile uploads, access control, headers, crash, load smoke, sizes)"
-rm -f artifacts/vitest-hardening.json
-npx vitest run --config vitest.hardening.config.ts --reporter=default --reporter=json \
-  --outputFile=artifacts/vitest-hardening.json || status=1
-read -r p f < <(count artifacts/vitest-hardening.json)
-passed=$((passed + p)); failed=$((failed + f))
+suite "Unit and integration tests" unit ""
+suite "Browser tests" browser vitest.browser.config.ts
+suite "Hardening (production build: hostile uploads, access control, headers, crash, load smoke, sizes)" hardening vitest.hardening.config.ts
 
 if [ "$failed" -gt 0 ]; then status=1; fi
 echo "${passed} passed, ${failed} failed"
