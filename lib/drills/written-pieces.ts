@@ -4,17 +4,13 @@
  */
 import Fraction from "fraction.js";
 import type { Written } from "../score/types";
+import { NOTE_TYPES } from "../score/write-durations";
 
-const BASES: readonly [string, Fraction][] = [
-  ["whole", new Fraction(4)],
-  ["half", new Fraction(2)],
-  ["quarter", new Fraction(1)],
-  ["eighth", new Fraction(1, 2)],
-  ["16th", new Fraction(1, 4)],
-  ["32nd", new Fraction(1, 8)],
-  ["64th", new Fraction(1, 16)],
-  ["128th", new Fraction(1, 32)],
-];
+/** Note values a drill writes: whole down to 128th (from the writer's table of MusicXML types). */
+const BASES = NOTE_TYPES.slice(
+  NOTE_TYPES.findIndex(([type]) => type === "whole"),
+  NOTE_TYPES.findIndex(([type]) => type === "128th") + 1,
+);
 
 /** Every written value (type with 0–2 dots), longest first. */
 const VALUES: readonly { type: string; dots: number; value: Fraction }[] = BASES.flatMap(
