@@ -16,7 +16,6 @@ const EnvSchema = z.object({
   UPLOADTHING_TOKEN: z.string().optional(),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Knotwork <no-reply@knotwork.test>"),
-  KNOTWORK_REFERENCE_DIR: z.string().optional(),
 });
 
 export type Env = z.infer<typeof EnvSchema>;

@@ -7,7 +7,7 @@ import { mergeTies } from "./ties";
 
 const fixture = (name: string) =>
   fs.readFileSync(path.resolve(__dirname, "../../fixtures/musicxml", name), "utf8");
-const referenceDir = process.env.KNOTWORK_REFERENCE_DIR ?? path.resolve(__dirname, "../../../shared/reference");
+const referenceDir = path.resolve(__dirname, "../../fixtures/reference");
 
 /** A one-part, one-bar file around the given <attributes> and notes. */
 const bar = (attributes: string, notes: string) => `<?xml version="1.0"?>

@@ -59,7 +59,7 @@ describe("drills from the demo knots", () => {
   });
 
   test.runIf(hasXmllint())("every drill validates against the MusicXML 4.0 XSD", () => {
-    // W3C MusicXML 4.0 schema (shared reference copy), read once for all drills.
+    // W3C MusicXML 4.0 schema (vendored copy in fixtures/reference), read once for all drills.
     const errors = validateAll(drills.map(({ drill }) => writeMusicXML(drill.score)));
     drills.forEach(({ name }, i) => expect(errors[i], name).toEqual([]));
   });

@@ -1,6 +1,6 @@
 /**
  * Difficulty map and fingering on real files: the demo pieces in fixtures/pieces and the piano files
- * of the reference corpus (lilypond-testsuite, via the shared reference folder).
+ * of the reference corpus (lilypond-testsuite, vendored in fixtures/reference).
  */
 import fs from "node:fs";
 import path from "node:path";

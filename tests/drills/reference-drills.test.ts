@@ -1,5 +1,5 @@
-// Every drill family on the two-staff piano files of the shared reference corpus
-// (../shared/reference/musicxml): two 2-bar passages per file, every family; bars exact, keyboard
+// Every drill family on the two-staff piano files of the vendored reference corpus
+// (fixtures/reference/musicxml): two 2-bar passages per file, every family; bars exact, keyboard
 // range, and validity against the MusicXML 4.0 XSD.
 import fs from "node:fs";
 import path from "node:path";
@@ -91,7 +91,7 @@ describe("drills on the reference corpus's piano files", () => {
 
   test.runIf(hasXmllint())("every drill validates against the MusicXML 4.0 XSD", () => {
     expect(drills.length).toBeGreaterThan(14);
-    // W3C MusicXML 4.0 schema (shared reference copy), read once for all drills.
+    // W3C MusicXML 4.0 schema (vendored copy in fixtures/reference), read once for all drills.
     const errors = validateAll(drills.map(({ drill }) => writeMusicXML(drill.score)));
     drills.forEach(({ name }, i) => expect(errors[i], name).toEqual([]));
   });

@@ -1,4 +1,4 @@
-// Reference corpus: every file of ../shared/reference/musicxml is read by readScore, and its notes are
+// Reference corpus: every file of fixtures/reference/musicxml is read by readScore, and its notes are
 // compared with verovio 6.3's timemap (an independent C++ MusicXML reader, test-only dependency).
 import { beforeAll, describe, expect, test } from "vitest";
 import { readScore, scoreText } from "../../lib/score/read";

@@ -5,8 +5,8 @@ import { SaxesParser } from "saxes";
 
 const repoRoot = path.resolve(__dirname, "../..");
 
-/** The shared reference folder (MusicXML test suite, W3C examples, FACTS.md). */
-export const referenceDir = process.env.KNOTWORK_REFERENCE_DIR ?? path.resolve(repoRoot, "../shared/reference");
+/** The vendored reference folder (MusicXML test suite, W3C examples, real scores, FACTS.md). */
+export const referenceDir = path.join(repoRoot, "fixtures/reference");
 
 /** Every MusicXML file of the reference corpus, relative to referenceDir/musicxml. */
 export function referenceFiles(): string[] {

@@ -1,5 +1,5 @@
 /**
- * The writer against the reference corpus: for every file in ../shared/reference/musicxml/,
+ * The writer against the reference corpus: for every file in fixtures/reference/musicxml/,
  * read → write → (a) validates against the MusicXML 4.0 XSD, (b) reads back with the same sounding
  * notes, (c) verovio, an independent reader, hears the same notes in the written file.
  */

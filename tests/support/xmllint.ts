@@ -1,7 +1,7 @@
 /**
  * Validates MusicXML text against the MusicXML 4.0 XSD with `xmllint` (Debian libxml2-utils).
  *
- * The schema is the W3C copy in the shared reference folder. `musicxml.local.xsd` is byte-for-byte
+ * The schema is the W3C copy vendored in fixtures/reference (see its SOURCES.md). `musicxml.local.xsd` is byte-for-byte
  * `musicxml.xsd` except that its two `xs:import` lines point at the local `xml.xsd` / `xlink.xsd`
  * (see the schema folder's README), so validation runs offline with `--nonet`; the plain
  * `musicxml.xsd` tries to fetch those two files from musicxml.org and fails to compile without network.
@@ -12,9 +12,9 @@ import path from "node:path";
 
 const repoRoot = path.resolve(__dirname, "../..");
 
-/** The shared reference folder (MusicXML corpus, XSD, FACTS.md). */
+/** The vendored reference folder (MusicXML test suite, W3C samples and XSD, real scores, FACTS.md). */
 export function referenceDir(): string {
-  return process.env.KNOTWORK_REFERENCE_DIR ?? path.resolve(repoRoot, "../shared/reference");
+  return path.join(repoRoot, "fixtures/reference");
 }
 
 /** The offline copy of the MusicXML 4.0 XSD. */
