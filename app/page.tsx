@@ -2,7 +2,7 @@ import Link from "next/link";
 import { KNOT_PATH, Wordmark } from "@/components/logo-mark";
 import { ButtonLink } from "@/components/ui/button";
 import { CAUTION } from "@/lib/caution";
-import { getStudioContext, homePathFor } from "@/lib/session";
+import { getStudioContext, homePathFor } from "@/lib/auth/session";
 
 const FAMILIES = [
   ["Blocking", "Each hand position played as one chord, so the hand learns its shape before the notes run."],

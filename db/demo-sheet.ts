@@ -3,8 +3,8 @@
  * pebble study, right hand), assigned to the first demo student with a few practice entries.
  */
 import { and, eq } from "drizzle-orm";
-import { generateForKnot } from "../lib/knot-generate";
-import { pickedDrills } from "../lib/sheet-save";
+import { generateForKnot } from "../lib/knots/generate";
+import { pickedDrills } from "../lib/sheets/save";
 import type { Db } from "./index";
 import { assignment, passage, practiceEntry, score, sheet, sheetDrill } from "./schema";
 

@@ -1,6 +1,6 @@
 import path from "node:path";
 import { and, eq } from "drizzle-orm";
-import { insertCredentialUser } from "../lib/teacher-sign-up";
+import { insertCredentialUser } from "../lib/auth/teacher-sign-up";
 import type { Db } from "./index";
 import { loadDemoPieces } from "./demo-pieces";
 import { seedDemoSheet } from "./demo-sheet";

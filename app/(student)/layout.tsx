@@ -1,5 +1,5 @@
 import { AppShell } from "@/components/nav/app-shell";
-import { requireStudent } from "@/lib/session";
+import { requireStudent } from "@/lib/auth/session";
 
 export default async function StudentLayout({ children }: { children: React.ReactNode }) {
   const ctx = await requireStudent();

@@ -1,5 +1,5 @@
 import { AppShell } from "@/components/nav/app-shell";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export default async function TeacherLayout({ children }: { children: React.ReactNode }) {
   const ctx = await requireTeacher();

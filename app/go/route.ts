@@ -2,7 +2,7 @@ import type { NextRequest } from "next/server";
 import { db } from "@/db";
 import { findMembershipForUser } from "@/db/queries/memberships";
 import { auth } from "@/lib/auth";
-import { homePathFor } from "@/lib/session";
+import { homePathFor } from "@/lib/auth/session";
 
 /** A same-origin redirect with a relative Location, so the host the browser used is kept. */
 function goTo(pathname: string) {

@@ -1,6 +1,6 @@
 "use client";
 import { useState } from "react";
-import { authRequest } from "@/lib/auth-request";
+import { authRequest } from "@/lib/auth/client";
 import { Button } from "../ui/button";
 import { Field, FormMessage } from "../ui/field";
 

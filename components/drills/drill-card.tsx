@@ -1,5 +1,5 @@
 "use client";
-import type { DrillDto } from "@/lib/drill-dto";
+import type { DrillDto } from "@/lib/knots/dto";
 import { DownloadLinks } from "./download-links";
 import { DrillEngraving } from "./drill-engraving";
 import { DrillFacts } from "./drill-facts";

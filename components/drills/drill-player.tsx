@@ -1,6 +1,6 @@
 "use client";
 import dynamic from "next/dynamic";
-import type { PlaybackData } from "@/lib/drill-dto";
+import type { PlaybackData } from "@/lib/knots/dto";
 
 const Player = dynamic(() => import("@/components/score/player").then((m) => m.Player), {
   ssr: false,

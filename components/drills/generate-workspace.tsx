@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useEffect, useMemo, useState } from "react";
-import type { GenerateRequestInput } from "@/lib/generate-request";
+import type { GenerateRequestInput } from "@/lib/knots/generate-request";
 import { DrillCard } from "./drill-card";
 import type { FamilyInfo } from "./family-options";
 import { FamilySwitches } from "./family-switches";

@@ -1,7 +1,7 @@
 "use client";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
-import type { DrillDto } from "@/lib/drill-dto";
+import type { DrillDto } from "@/lib/knots/dto";
 
 export interface PickedDrill {
   key: string;

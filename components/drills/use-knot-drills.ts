@@ -1,7 +1,7 @@
 "use client";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import type { DrillDto } from "@/lib/drill-dto";
-import type { GenerateRequestInput } from "@/lib/generate-request";
+import type { DrillDto } from "@/lib/knots/dto";
+import type { GenerateRequestInput } from "@/lib/knots/generate-request";
 import { drillKeys } from "@/lib/query-keys";
 
 export interface KnotDrillsResponse {

@@ -1,7 +1,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { CAUTION } from "@/lib/caution";
-import type { StudioContext } from "@/lib/session";
+import type { StudioContext } from "@/lib/auth/session";
 import { Wordmark } from "../logo-mark";
 import { NAV_BY_ROLE } from "./nav-items";
 import { NavLinks } from "./nav-links";

@@ -1,7 +1,7 @@
 "use client";
 import { useRouter } from "next/navigation";
 import { useState, useTransition } from "react";
-import { authRequest } from "@/lib/auth-request";
+import { authRequest } from "@/lib/auth/client";
 
 export function SignOutButton() {
   const router = useRouter();

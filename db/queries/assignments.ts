@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { assignment, membership, passage, practiceEntry, score, sheet, sheetDrill, user } from "../schema";
 

@@ -1,6 +1,6 @@
 import { and, desc, eq, isNull } from "drizzle-orm";
-import { hashToken } from "../../lib/invitations";
-import { inStudio } from "../../lib/studio-scope";
+import { hashToken } from "../../lib/students/invitations";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { invitation, studio } from "../schema";
 

@@ -1,5 +1,5 @@
 import { and, eq, sql } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { handProfile, membership, passage, score, user } from "../schema";
 import { preparedFor } from "./prepared";

@@ -1,5 +1,5 @@
 import { and, desc, eq } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { passage, score } from "../schema";
 

@@ -1,5 +1,5 @@
 import { asc, eq } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { assignment, membership, practiceEntry, sheet, user } from "../schema";
 

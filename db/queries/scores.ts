@@ -1,5 +1,5 @@
 import { and, count, desc, eq, inArray, sql } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { passage, score, sheet, type ScorePartSummary } from "../schema";
 import { preparedFor } from "./prepared";

@@ -1,5 +1,5 @@
 import { and, asc, count, desc, eq, sql } from "drizzle-orm";
-import { inStudio } from "../../lib/studio-scope";
+import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { passage, score, sheet, sheetDrill, type SheetDrillMeta } from "../schema";
 import { preparedFor } from "./prepared";

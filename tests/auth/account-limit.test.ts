@@ -8,15 +8,15 @@ import { useTempDatabase } from "../db/temp-db";
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
 let auth: typeof import("../../lib/auth").auth;
-let limit: typeof import("../../lib/sign-in-limit");
+let limit: typeof import("../../lib/auth/sign-in-limit");
 const base = "http://localhost:3000";
 let address = 0;
 
 beforeAll(async () => {
   t = await useTempDatabase("account-limit");
   ({ auth } = await import("../../lib/auth"));
-  limit = await import("../../lib/sign-in-limit");
-  const { createTeacherAccount } = await import("../../lib/teacher-sign-up");
+  limit = await import("../../lib/auth/sign-in-limit");
+  const { createTeacherAccount } = await import("../../lib/auth/teacher-sign-up");
   for (const [name, email] of [["Pia Rowntree", "pia@knotwork.test"], ["Cato Ferris", "cato@knotwork.test"]]) {
     const made = await createTeacherAccount(t.db, { name, email, password: "right-password", studioName: `${name} Studio` });
     if (!made.ok) throw new Error(made.message);

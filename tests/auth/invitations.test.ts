@@ -2,12 +2,12 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { countRows, useTempDatabase } from "../db/temp-db";
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
-let inv: typeof import("../../lib/invitations");
+let inv: typeof import("../../lib/students/invitations");
 let auth: typeof import("../../lib/auth").auth;
 
 beforeAll(async () => {
   t = await useTempDatabase("invitations");
-  inv = await import("../../lib/invitations");
+  inv = await import("../../lib/students/invitations");
   ({ auth } = await import("../../lib/auth"));
   await t.client.execute("INSERT INTO studio (id, name) VALUES ('s1', 'Quince Row Studio')");
 });

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { clientKey, createRateLimiter } from "../../lib/rate-limit";
+import { clientKey, createRateLimiter } from "../../lib/auth/rate-limit";
 
 describe("createRateLimiter", () => {
   test("allows max attempts per window per key, then refuses until the window ends", () => {

@@ -23,7 +23,7 @@ function findFiles(dir: string, name: RegExp): string[] {
 }
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
-let session: typeof import("../../lib/session");
+let session: typeof import("../../lib/auth/session");
 let studentCookie = "";
 let teacherCookie = "";
 
@@ -48,8 +48,8 @@ async function expectForbidden(run: () => unknown) {
 
 beforeAll(async () => {
   t = await useTempDatabase("roles");
-  const { createTeacherAccount } = await import("../../lib/teacher-sign-up");
-  const { createInvitation, acceptInvitation } = await import("../../lib/invitations");
+  const { createTeacherAccount } = await import("../../lib/auth/teacher-sign-up");
+  const { createInvitation, acceptInvitation } = await import("../../lib/students/invitations");
   const teacher = await createTeacherAccount(t.db, {
     name: "Ada Teacher", email: "ada@knotwork.test", password: "teach-slowly", studioName: "Alder Studio",
   });
@@ -59,7 +59,7 @@ beforeAll(async () => {
   if (!student.ok) throw new Error(student.message);
   teacherCookie = await cookieFor("ada@knotwork.test", "teach-slowly");
   studentCookie = await cookieFor("sol@knotwork.test", "practise-daily");
-  session = await import("../../lib/session");
+  session = await import("../../lib/auth/session");
 });
 afterAll(() => t.cleanup());
 

@@ -2,12 +2,12 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { countRows, useTempDatabase } from "../db/temp-db";
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
-let createTeacherAccount: typeof import("../../lib/teacher-sign-up").createTeacherAccount;
+let createTeacherAccount: typeof import("../../lib/auth/teacher-sign-up").createTeacherAccount;
 let auth: typeof import("../../lib/auth").auth;
 
 beforeAll(async () => {
   t = await useTempDatabase("sign-up");
-  ({ createTeacherAccount } = await import("../../lib/teacher-sign-up"));
+  ({ createTeacherAccount } = await import("../../lib/auth/teacher-sign-up"));
   ({ auth } = await import("../../lib/auth"));
 });
 afterAll(() => t.cleanup());

@@ -4,7 +4,7 @@ import path from "node:path";
 
 /**
  * Points DATABASE_URL at a fresh temp SQLite file, runs the committed migrations and returns the
- * shared `db`. Call before importing anything that opens the database (lib/auth, lib/session …).
+ * shared `db`. Call before importing anything that opens the database (lib/auth, lib/auth/session …).
  */
 export async function useTempDatabase(label: string) {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), `knotwork-${label}-`));

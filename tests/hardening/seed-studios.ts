@@ -15,10 +15,10 @@ import { saveSheet } from "../../db/queries/sheets";
 import { createAssignments } from "../../db/queries/assignments";
 import { DEMO_PASSWORD, DEMO_STUDENTS, DEMO_TEACHER, seedDemo } from "../../db/seed";
 import { membership, passage, practiceEntry, score, sheetDrill, user } from "../../db/schema";
-import { acceptInvitation, createInvitation } from "../../lib/invitations";
-import { generateForKnot } from "../../lib/knot-generate";
-import { pickedDrills } from "../../lib/sheet-save";
-import { createTeacherAccount } from "../../lib/teacher-sign-up";
+import { acceptInvitation, createInvitation } from "../../lib/students/invitations";
+import { generateForKnot } from "../../lib/knots/generate";
+import { pickedDrills } from "../../lib/sheets/save";
+import { createTeacherAccount } from "../../lib/auth/teacher-sign-up";
 import { OTHER_STUDENT, OTHER_TEACHER, SEEDED_SHEET_TITLE, type SeedIds } from "./personas";
 
 async function membershipOf(email: string) {

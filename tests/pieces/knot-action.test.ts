@@ -6,7 +6,7 @@ import { countRows, useTempDatabase } from "../db/temp-db";
 import { makeStudio, pieceFile, type Studio } from "./studio-fixtures";
 
 const session = vi.hoisted(() => ({ current: null as null | { studioId: string; userId: string } }));
-vi.mock("@/lib/session", () => ({
+vi.mock("@/lib/auth/session", () => ({
   requireTeacher: async () => {
     if (!session.current) throw new Error("NEXT_REDIRECT");
     return { user: { id: session.current.userId, name: "T", email: "t@knotwork.test" }, studioId: session.current.studioId, studioName: "S", membershipId: "m", role: "teacher" };

@@ -7,7 +7,7 @@ import { countRows, useTempDatabase } from "../db/temp-db";
 import { makeStudio, pieceFile, type Studio } from "./studio-fixtures";
 
 const session = vi.hoisted(() => ({ current: null as null | { studioId: string; userId: string; role: "teacher" | "student" } }));
-vi.mock("@/lib/session", () => ({
+vi.mock("@/lib/auth/session", () => ({
   getStudioContext: async () =>
     session.current && {
       user: { id: session.current.userId, name: "Test", email: "t@knotwork.test" },

@@ -3,9 +3,9 @@ import { unzipSync } from "fflate";
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, test } from "vitest";
-import { CONTENT_TYPES, drillFile, sheetZip } from "../../lib/drill-files";
-import { GenerateRequest } from "../../lib/generate-request";
-import { generateForKnot } from "../../lib/knot-generate";
+import { CONTENT_TYPES, drillFile, sheetZip } from "../../lib/knots/files";
+import { GenerateRequest } from "../../lib/knots/generate-request";
+import { generateForKnot } from "../../lib/knots/generate";
 import { readScore, writeMusicXML } from "../../lib/score";
 import type { Score } from "../../lib/score/types";
 

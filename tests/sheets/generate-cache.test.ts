@@ -16,11 +16,11 @@ vi.mock("next/headers", () => ({
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
 let route: typeof import("../../app/api/knots/[knotId]/drills/route");
-let gen: typeof import("../../lib/knot-generate");
-let cache: typeof import("../../lib/knot-drills-cache");
+let gen: typeof import("../../lib/knots/generate");
+let cache: typeof import("../../lib/knots/cache");
 let knotQueries: typeof import("../../db/queries/knot-drills");
 let schema: typeof import("../../db/schema");
-let GenerateRequest: typeof import("../../lib/generate-request").GenerateRequest;
+let GenerateRequest: typeof import("../../lib/knots/generate-request").GenerateRequest;
 let studioId: string;
 let knotId: string;
 
@@ -29,11 +29,11 @@ beforeAll(async () => {
   const seed = await import("../../db/seed");
   ({ studioId } = await seed.seedDemo(t.db));
   route = await import("../../app/api/knots/[knotId]/drills/route");
-  gen = await import("../../lib/knot-generate");
-  cache = await import("../../lib/knot-drills-cache");
+  gen = await import("../../lib/knots/generate");
+  cache = await import("../../lib/knots/cache");
   knotQueries = await import("../../db/queries/knot-drills");
   schema = await import("../../db/schema");
-  ({ GenerateRequest } = await import("../../lib/generate-request"));
+  ({ GenerateRequest } = await import("../../lib/knots/generate-request"));
   knotId = (await seededKnot(t.db)).id;
   request.headers = new Headers({ cookie: await memberCookie(seed.DEMO_TEACHER.email, seed.DEMO_PASSWORD) });
 });

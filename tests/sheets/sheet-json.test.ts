@@ -28,7 +28,7 @@ beforeAll(async () => {
   route = await import("../../app/api/sheets/[sheetId]/route");
   const [row] = await t.db.select({ id: schema.sheet.id }).from(schema.sheet).limit(1);
   sheetId = row!.id;
-  const { createTeacherAccount } = await import("../../lib/teacher-sign-up");
+  const { createTeacherAccount } = await import("../../lib/auth/teacher-sign-up");
   const other = await createTeacherAccount(t.db, { name: "Ivo Marlow", email: "ivo@elsewhere.test", password: "another-studio", studioName: "Quillon Keys" });
   if (!other.ok) throw new Error(other.message);
   cookies.teacher = await memberCookie(seed.DEMO_TEACHER.email, seed.DEMO_PASSWORD);

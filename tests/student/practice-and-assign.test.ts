@@ -169,7 +169,7 @@ describe("invitations", () => {
     const token = String(row.text).match(/\/invite\/([\w-]+)/)?.[1];
     expect(token).toBeTruthy();
     const { invitationByToken } = await import("@/db/queries/invitations");
-    const { acceptInvitation } = await import("@/lib/invitations");
+    const { acceptInvitation } = await import("@/lib/students/invitations");
     expect((await invitationByToken(t.db, token!)).state).toBe("valid");
     expect((await acceptInvitation(token!, { name: "New Pupil", password: "practise-daily" }, t.db)).ok).toBe(true);
     expect((await invitationByToken(t.db, token!)).state).toBe("used");
@@ -180,7 +180,7 @@ describe("invitations", () => {
   });
 
   test("an expired link is reported as expired and stores nothing", async () => {
-    const { createInvitation, acceptInvitation } = await import("@/lib/invitations");
+    const { createInvitation, acceptInvitation } = await import("@/lib/students/invitations");
     const { invitationByToken } = await import("@/db/queries/invitations");
     const { token } = await createInvitation({ studioId: f.studioId, email: "late@knotwork.test", invitedBy: f.teacherUserId, ttlMs: -1000 }, t.db);
     expect((await invitationByToken(t.db, token)).state).toBe("expired");

@@ -17,8 +17,8 @@ export interface StudioFixture {
 }
 
 export async function buildStudio(db: Db, tag: string): Promise<StudioFixture> {
-  const { createTeacherAccount } = await import("@/lib/teacher-sign-up");
-  const { createInvitation, acceptInvitation } = await import("@/lib/invitations");
+  const { createTeacherAccount } = await import("@/lib/auth/teacher-sign-up");
+  const { createInvitation, acceptInvitation } = await import("@/lib/students/invitations");
   const { findMembershipForUser } = await import("@/db/queries/memberships");
   const { saveSheet, getSheet } = await import("@/db/queries/sheets");
   const { createAssignments } = await import("@/db/queries/assignments");

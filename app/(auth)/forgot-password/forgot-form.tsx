@@ -3,7 +3,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
-import { authRequest } from "@/lib/auth-request";
+import { authRequest } from "@/lib/auth/client";
 
 /** Asks the auth server for a reset link; the answer is the same whether or not the e-mail has an account. */
 export function ForgotForm() {

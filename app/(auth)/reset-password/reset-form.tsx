@@ -3,8 +3,8 @@ import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormMessage } from "@/components/ui/field";
-import { authRequest } from "@/lib/auth-request";
-import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/password-rules";
+import { authRequest } from "@/lib/auth/client";
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
 
 /** Sets a new password with the token from the reset e-mail. */
 export function ResetForm({ token }: { token: string }) {

@@ -4,8 +4,8 @@ import { redirect } from "next/navigation";
 import { db } from "@/db";
 import { fail, type ActionResult } from "@/lib/action-result";
 import { auth } from "@/lib/auth";
-import { clientKey, createRateLimiter } from "@/lib/rate-limit";
-import { createTeacherAccount } from "@/lib/teacher-sign-up";
+import { clientKey, createRateLimiter } from "@/lib/auth/rate-limit";
+import { createTeacherAccount } from "@/lib/auth/teacher-sign-up";
 
 const signUpLimiter = createRateLimiter(10, 10 * 60 * 1000);
 

@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { db } from "@/db";
 import type { ActionResult } from "@/lib/action-result";
-import { requireStudent } from "@/lib/session";
+import { requireStudent } from "@/lib/auth/session";
 import { logPractice } from "./log-practice";
 
 /** The practice form's action: the signed-in student, the same schema as the form, then the store. */

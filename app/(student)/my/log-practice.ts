@@ -2,7 +2,7 @@ import type { Db } from "@/db";
 import { getAssignment } from "@/db/queries/assignments";
 import { insertPracticeEntry } from "@/db/queries/practice";
 import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
-import type { StudioContext } from "@/lib/session";
+import type { StudioContext } from "@/lib/auth/session";
 import { PracticeEntryInput } from "./practice-input";
 
 /**

@@ -4,7 +4,7 @@ import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
 import { listAssignmentsForStudent } from "@/db/queries/assignments";
-import { requireStudent } from "@/lib/session";
+import { requireStudent } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "My drill sheets" };
 

@@ -3,7 +3,7 @@ import { createAssignments, studentsById } from "@/db/queries/assignments";
 import { getSheet } from "@/db/queries/sheets";
 import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
 import { assignmentMail, sendMail } from "@/lib/mail";
-import type { StudioContext } from "@/lib/session";
+import type { StudioContext } from "@/lib/auth/session";
 import { AssignmentInput } from "./assignment-input";
 
 /**

@@ -7,7 +7,7 @@ import { db } from "@/db";
 import { listAssignmentsForStudio } from "@/db/queries/assignments";
 import { getSheet, listSheets } from "@/db/queries/sheets";
 import { listStudents } from "@/db/queries/students";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { utcDay } from "../../(student)/my/practice-input";
 import { AssignForm } from "./assign-form";
 import { overSpanByStudent } from "./student-fit";

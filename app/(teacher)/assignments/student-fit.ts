@@ -1,5 +1,5 @@
 import type { HandProfile } from "@/lib/drills/types";
-import { profileOrDefault, safeSpanForProfile, type SpanHands } from "@/lib/student-span";
+import { profileOrDefault, safeSpanForProfile, type SpanHands } from "@/lib/students/span";
 
 /** A drill of the sheet being assigned that is too wide for one student's hand. */
 export interface OverSpan {

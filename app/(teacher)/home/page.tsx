@@ -7,7 +7,7 @@ import { listPassages } from "@/db/queries/passages";
 import { listScores } from "@/db/queries/scores";
 import { listSheets } from "@/db/queries/sheets";
 import { listStudents } from "@/db/queries/students";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Studio home" };
 

@@ -4,7 +4,7 @@ import { PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
 import { listPassages } from "@/db/queries/passages";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Knots" };
 

@@ -5,7 +5,7 @@ import { PiecesPlainTable } from "@/components/pieces/pieces-plain-table";
 import { UploadForm } from "@/components/pieces/upload-form";
 import { db } from "@/db";
 import { listScoresWithKnots } from "@/db/queries/scores";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Pieces" };
 

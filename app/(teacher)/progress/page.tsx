@@ -6,7 +6,7 @@ import { db } from "@/db";
 import { getAssignment, listAssignmentsForStudio } from "@/db/queries/assignments";
 import { listPracticeEntries } from "@/db/queries/practice";
 import { listStudents } from "@/db/queries/students";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { ProgressChart } from "./chart-loader";
 
 export const metadata: Metadata = { title: "Progress" };

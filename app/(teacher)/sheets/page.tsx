@@ -4,7 +4,7 @@ import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
 import { listSheets } from "@/db/queries/sheets";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Drill sheets" };
 

@@ -3,7 +3,7 @@ import { revalidatePath } from "next/cache";
 import { db } from "@/db";
 import type { ActionResult } from "@/lib/action-result";
 import { readEnv } from "@/lib/env";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { inviteStudent, updateHandProfile } from "./student-ops";
 
 export type InviteState = ActionResult<{ email: string; delivered: boolean }> | null;

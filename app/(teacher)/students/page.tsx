@@ -5,7 +5,7 @@ import { db } from "@/db";
 import { listAssignmentsForStudio } from "@/db/queries/assignments";
 import { listOpenInvitations } from "@/db/queries/invitations";
 import { listStudents } from "@/db/queries/students";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { InviteForm } from "./invite-form";
 import type { StudentRow } from "./student-row";
 import { StudentsList } from "./students-list";

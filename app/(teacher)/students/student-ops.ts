@@ -4,9 +4,9 @@ import { isStudentOf, saveHandProfile } from "@/db/queries/students";
 import { membership, user } from "@/db/schema";
 import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
 import { OCTAVE_WIDTHS, profileFromInches } from "@/lib/drills/hand";
-import { createInvitation } from "@/lib/invitations";
+import { createInvitation } from "@/lib/students/invitations";
 import { invitationMail, sendMail } from "@/lib/mail";
-import type { StudioContext } from "@/lib/session";
+import type { StudioContext } from "@/lib/auth/session";
 import { HandProfileInput, InviteInput } from "./student-inputs";
 
 type TeacherCtx = Pick<StudioContext, "role" | "studioId" | "studioName" | "user">;

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { db } from "@/db";
-import { getStudioContext, type StudioContext } from "@/lib/session";
+import { getStudioContext, type StudioContext } from "@/lib/auth/session";
 import { storeFromEnv } from "@/lib/storage";
 import type { UploadContext } from "./piece-upload";
 

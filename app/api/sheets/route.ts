@@ -1,10 +1,10 @@
 import { revalidatePath } from "next/cache";
 import { db } from "@/db";
 import { saveSheet } from "@/db/queries/sheets";
-import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
-import { requestProblems } from "@/lib/generate-request";
-import { drillsForStudioKnot } from "@/lib/knot-request";
-import { pickedDrills, SaveSheetRequest } from "@/lib/sheet-save";
+import { apiTeacher, jsonError, notFoundResponse } from "@/lib/auth/api-session";
+import { requestProblems } from "@/lib/knots/generate-request";
+import { drillsForStudioKnot } from "@/lib/knots/request";
+import { pickedDrills, SaveSheetRequest } from "@/lib/sheets/save";
 
 export const dynamic = "force-dynamic";
 

@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { db } from "@/db";
 import { fail, type ActionResult } from "@/lib/action-result";
 import { auth } from "@/lib/auth";
-import { acceptInvitation } from "@/lib/invitations";
+import { acceptInvitation } from "@/lib/students/invitations";
 
 export type JoinState = (ActionResult<null> & { name?: string }) | null;
 

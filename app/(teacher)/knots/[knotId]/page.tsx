@@ -10,8 +10,8 @@ import { QueryProvider } from "@/components/providers";
 import { db } from "@/db";
 import { getKnotSource, listHandProfiles } from "@/db/queries/knot-drills";
 import { DEFAULT_PROFILE, families, suggestFamilies, type ProblemTag } from "@/lib/drills";
-import { knotExcerpt } from "@/lib/knot-generate";
-import { requireTeacher } from "@/lib/session";
+import { knotExcerpt } from "@/lib/knots/generate";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Generate drills" };

@@ -8,7 +8,7 @@ import { getScore } from "@/db/queries/scores";
 import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
 import { PROBLEM_TAGS } from "@/lib/drills";
 import { readScore } from "@/lib/score";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { printedBar } from "./piece-data";
 
 const KnotInput = z

@@ -1,7 +1,7 @@
 import { notFound } from "next/navigation";
 import { db } from "@/db";
 import { getScore } from "@/db/queries/scores";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 /**
  * Checks that the piece belongs to the teacher's studio before the page's loading skeleton streams,

@@ -8,7 +8,7 @@ import { db } from "@/db";
 import { listPassagesForScore } from "@/db/queries/passages";
 import { getScore } from "@/db/queries/scores";
 import { PROBLEM_TAGS } from "@/lib/drills";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 import { createKnot } from "./actions";
 import { pieceWorkspaceData } from "./piece-data";
 

@@ -10,9 +10,9 @@ import { PrintHandoutButton } from "@/components/handout/print-handout-button";
 import { db } from "@/db";
 import { getKnotHeading } from "@/db/queries/knot-drills";
 import { getSheet } from "@/db/queries/sheets";
-import { playbackOf } from "@/lib/drill-dto";
+import { playbackOf } from "@/lib/knots/dto";
 import { readScore } from "@/lib/score";
-import { requireTeacher } from "@/lib/session";
+import { requireTeacher } from "@/lib/auth/session";
 
 export const dynamic = "force-dynamic";
 export const metadata: Metadata = { title: "Drill sheet" };

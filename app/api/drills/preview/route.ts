@@ -1,7 +1,7 @@
-import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
-import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/drill-files";
-import { GenerateRequest, requestProblems } from "@/lib/generate-request";
-import { drillsForStudioKnot } from "@/lib/knot-request";
+import { apiTeacher, jsonError, notFoundResponse } from "@/lib/auth/api-session";
+import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/knots/files";
+import { GenerateRequest, requestProblems } from "@/lib/knots/generate-request";
+import { drillsForStudioKnot } from "@/lib/knots/request";
 import { writeMusicXML } from "@/lib/score";
 
 export const dynamic = "force-dynamic";

@@ -1,8 +1,8 @@
 import { db } from "@/db";
 import { latestAssignmentOfSheet } from "@/db/queries/assignments";
 import { getSheetOverview } from "@/db/queries/sheets";
-import { apiMember, notFoundResponse } from "@/lib/api-session";
-import { canReadSheet } from "@/lib/sheet-access";
+import { apiMember, notFoundResponse } from "@/lib/auth/api-session";
+import { canReadSheet } from "@/lib/sheets/access";
 
 export const dynamic = "force-dynamic";
 
@@ -10,7 +10,7 @@ export const dynamic = "force-dynamic";
  * GET → the drill sheet as JSON: title, notes, its knot and piece, and its drills in order with their
  * metadata and tempo goals (a student's goals come from their newest assignment of the sheet).
  * The drills' MusicXML only with `?include=musicxml`. Teachers of the studio and students with the
- * sheet assigned may read it (lib/sheet-access); 401 signed out, 404 for anyone else.
+ * sheet assigned may read it (lib/sheets/access); 401 signed out, 404 for anyone else.
  */
 export async function GET(request: Request, { params }: { params: Promise<{ sheetId: string }> }) {
   const ctx = await apiMember();

@@ -1,4 +1,4 @@
-import { playbackOf } from "@/lib/drill-dto";
+import { playbackOf } from "@/lib/knots/dto";
 import { readScore } from "@/lib/score/read";
 import type { StudentDrill } from "./sheet-drills";
 

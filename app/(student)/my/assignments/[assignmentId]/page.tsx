@@ -5,7 +5,7 @@ import { PrintHandoutButton } from "@/components/handout/print-handout-button";
 import { Card, PageHeader } from "@/components/ui/card";
 import { db } from "@/db";
 import { listPracticeEntries } from "@/db/queries/practice";
-import { requireStudent } from "@/lib/session";
+import { requireStudent } from "@/lib/auth/session";
 import { utcDay } from "../../practice-input";
 import { drillPlayback } from "./drill-playback";
 import { PracticeForm } from "./practice-form";

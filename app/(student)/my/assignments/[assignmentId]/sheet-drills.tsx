@@ -1,6 +1,6 @@
 "use client";
 import dynamic from "next/dynamic";
-import type { PlaybackData } from "@/lib/drill-dto";
+import type { PlaybackData } from "@/lib/knots/dto";
 import type { StudentDrillData } from "./student-sheet-data";
 
 const DrillPreview = dynamic(() => import("@/components/score/drill-preview").then((m) => m.DrillPreview), {

@@ -2,7 +2,7 @@ import type { Db } from "@/db";
 import { getAssignment } from "@/db/queries/assignments";
 import { getHandProfile } from "@/db/queries/knot-drills";
 import type { HandProfile } from "@/lib/drills/types";
-import { drillWarningsFor, profileOrDefault } from "@/lib/student-span";
+import { drillWarningsFor, profileOrDefault } from "@/lib/students/span";
 
 /** One drill as the student sees it, its span checked against their own hand profile. */
 export interface StudentDrillData {

@@ -1,8 +1,8 @@
 import { db } from "@/db";
 import { getSheetDrill } from "@/db/queries/sheets";
-import { apiMember, notFoundResponse } from "@/lib/api-session";
-import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/drill-files";
-import { canReadSheet } from "@/lib/sheet-access";
+import { apiMember, notFoundResponse } from "@/lib/auth/api-session";
+import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/knots/files";
+import { canReadSheet } from "@/lib/sheets/access";
 
 export const dynamic = "force-dynamic";
 

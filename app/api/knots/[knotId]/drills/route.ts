@@ -1,15 +1,15 @@
 import { db } from "@/db";
 import { getHandProfile, getKnotStamp, getScoreMusicXml } from "@/db/queries/knot-drills";
-import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
-import { GenerateRequest, requestProblems } from "@/lib/generate-request";
-import { knotDrillsBody } from "@/lib/knot-drills-cache";
+import { apiTeacher, jsonError, notFoundResponse } from "@/lib/auth/api-session";
+import { GenerateRequest, requestProblems } from "@/lib/knots/generate-request";
+import { knotDrillsBody } from "@/lib/knots/cache";
 import { isScoreError } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
 
 /**
  * POST { families, options, profile?, seed? } → { drills, skipped } for one knot of the teacher's
- * studio. The answer is deterministic, so it comes from lib/knot-drills-cache when the knot, its
+ * studio. The answer is deterministic, so it comes from lib/knots/cache when the knot, its
  * piece, the request and the hand are unchanged.
  */
 export async function POST(request: Request, { params }: { params: Promise<{ knotId: string }> }) {

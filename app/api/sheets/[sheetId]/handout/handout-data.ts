@@ -4,9 +4,9 @@ import { getHandProfile } from "@/db/queries/knot-drills";
 import { getSheet } from "@/db/queries/sheets";
 import type { HandoutInput, Paper } from "@/lib/handout";
 import { HANDOUT_WARNING_MAX } from "@/lib/handout/input";
-import { drillWarningsFor, profileOrDefault } from "@/lib/student-span";
-import type { StudioContext } from "@/lib/session";
-import { fileStem } from "@/lib/drill-files";
+import { drillWarningsFor, profileOrDefault } from "@/lib/students/span";
+import type { StudioContext } from "@/lib/auth/session";
+import { fileStem } from "@/lib/knots/files";
 
 /** Tempo limits the handout accepts (its zod schema). */
 const MIN_TEMPO = 20;

@@ -1,7 +1,7 @@
 import { db } from "@/db";
-import { apiMember, jsonError, notFoundResponse } from "@/lib/api-session";
+import { apiMember, jsonError, notFoundResponse } from "@/lib/auth/api-session";
 import { PAPER_SIZES, renderHandoutPdf, type Paper } from "@/lib/handout";
-import { canReadSheet } from "@/lib/sheet-access";
+import { canReadSheet } from "@/lib/sheets/access";
 import { handoutFileName, loadHandoutInput } from "./handout-data";
 
 export const dynamic = "force-dynamic";

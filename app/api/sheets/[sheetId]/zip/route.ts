@@ -1,8 +1,8 @@
 import { db } from "@/db";
 import { getSheet } from "@/db/queries/sheets";
-import { apiMember, notFoundResponse } from "@/lib/api-session";
-import { downloadResponse, sheetZip } from "@/lib/drill-files";
-import { canReadSheet } from "@/lib/sheet-access";
+import { apiMember, notFoundResponse } from "@/lib/auth/api-session";
+import { downloadResponse, sheetZip } from "@/lib/knots/files";
+import { canReadSheet } from "@/lib/sheets/access";
 
 export const dynamic = "force-dynamic";
 

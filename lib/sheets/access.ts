@@ -2,10 +2,10 @@
  * Who may read a drill sheet and its downloads. One function, so the student side can add
  * "a student of the studio with this sheet assigned" in one place.
  */
-import { db } from "../db";
-import { studentHasSheet } from "../db/queries/assignments";
-import { sheetStudio } from "../db/queries/sheets";
-import type { StudioContext } from "./session";
+import { db } from "../../db";
+import { studentHasSheet } from "../../db/queries/assignments";
+import { sheetStudio } from "../../db/queries/sheets";
+import type { StudioContext } from "../auth/session";
 
 /**
  * True when the signed-in member may read the sheet: a teacher of the sheet's studio, or a student

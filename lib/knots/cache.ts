@@ -5,10 +5,10 @@
  * knot or the piece changes the key, so nothing has to be invalidated by hand.
  */
 import { createHash } from "node:crypto";
-import type { HandProfile } from "./drills/index";
+import type { HandProfile } from "../drills/index";
 import type { GenerateRequest } from "./generate-request";
-import { generateForPassage, knotDrillsJson, passageOf, type KnotSource } from "./knot-generate";
-import { Lru } from "./lru";
+import { generateForPassage, knotDrillsJson, passageOf, type KnotSource } from "./generate";
+import { Lru } from "../lru";
 import { parsedScore, cachedScore } from "./score-cache";
 
 /** What the handler knows about a knot before reading its piece (db/queries/knot-drills getKnotStamp). */

@@ -3,10 +3,10 @@
  * were measured for whatever hand profile was picked when it was generated, so what a student sees
  * is checked again against their own profile (their hand profile, or the default hand).
  */
-import { DEFAULT_PROFILE } from "./drills/hand";
-import { measureSpan } from "./drills/span";
-import type { HandProfile, SpanReport } from "./drills/types";
-import { readScore } from "./score/index";
+import { DEFAULT_PROFILE } from "../drills/hand";
+import { measureSpan } from "../drills/span";
+import type { HandProfile, SpanReport } from "../drills/types";
+import { readScore } from "../score/index";
 
 export type SpanHands = "right" | "left" | "both";
 

@@ -1,10 +1,10 @@
 import { headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { cache } from "react";
-import { db } from "../db";
-import { findMembershipForUser } from "../db/queries/memberships";
-import type { Role } from "../db/schema";
-import { auth, type AuthSession } from "./auth";
+import { db } from "../../db";
+import { findMembershipForUser } from "../../db/queries/memberships";
+import type { Role } from "../../db/schema";
+import { auth, type AuthSession } from "./index";
 import { createSessionMemo } from "./session-memo";
 
 const sessions = createSessionMemo<AuthSession>();
@@ -20,7 +20,7 @@ export interface StudioContext {
 /**
  * better-auth's session for this request, looked up once per request (React cache). With the
  * session cookie cache on (lib/auth.ts) this is usually a signature check, not a database read,
- * and a cookie pair better-auth has just accepted is answered from lib/session-memo.
+ * and a cookie pair better-auth has just accepted is answered from lib/auth/session-memo.
  */
 export const getAuthSession = cache(async (): Promise<AuthSession | null> => {
   const h = await headers();

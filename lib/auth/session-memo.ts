@@ -6,7 +6,7 @@
  * same answer until the copy's own expiry, so the answer is kept until then, capped at MEMO_MS.
  * Nothing stays valid longer than the cookie cache already allows (DEVELOPERS.md, "Sessions").
  */
-import { Lru } from "./lru";
+import { Lru } from "../lru";
 
 const MEMO_MS = 30_000;
 const MAX_SESSIONS = 2_000;

@@ -2,10 +2,10 @@
  * Shared by the generate, preview-download and sheet-saving handlers: load a studio's knot and the
  * hand profile named in a request, then generate.
  */
-import { db } from "../db";
-import { getHandProfile, getKnotSource } from "../db/queries/knot-drills";
+import { db } from "../../db";
+import { getHandProfile, getKnotSource } from "../../db/queries/knot-drills";
 import type { GenerateRequest } from "./generate-request";
-import { generateForKnot, type KnotDrills } from "./knot-generate";
+import { generateForKnot, type KnotDrills } from "./generate";
 
 /** The knot's drills for the request, or null when the knot or the profile is not in the studio. */
 export async function drillsForStudioKnot(studioId: string, knotId: string, req: GenerateRequest): Promise<KnotDrills | null> {

@@ -4,10 +4,10 @@
  * server from the same request, so only Knotwork's own MusicXML is ever stored.
  */
 import { z } from "zod";
-import type { NewSheetDrill } from "../db/queries/sheets";
-import { GenerateRequest } from "./generate-request";
-import type { KnotDrills } from "./knot-generate";
-import { writeMusicXML } from "./score/write";
+import type { NewSheetDrill } from "../../db/queries/sheets";
+import { GenerateRequest } from "../knots/generate-request";
+import type { KnotDrills } from "../knots/generate";
+import { writeMusicXML } from "../score/write";
 
 const Bpm = z.number().int().min(20, "Tempo goals start at 20 bpm.").max(300, "Tempo goals stop at 300 bpm.");
 

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
-import { playbackOf } from "./drill-dto";
-import { playbackEvents } from "./playback";
-import { readScore } from "./score/read";
+import { playbackOf } from "../knots/dto";
+import { playbackEvents } from "./index";
+import { readScore } from "../score/read";
 
 // Two bars of 4/4, divisions 1 (one division per quarter). Bar 1: C4 C4 quarters, then E4 half
 // tied over the barline to an E4 quarter in bar 2; then G4 quarter and a half rest.

@@ -4,8 +4,8 @@
  * once for their full merged length (`mergeTies`), grace notes take their short slot before the
  * beat and dynamics set the velocity.
  */
-import { toPerformance } from "./score/performance";
-import type { Score } from "./score/types";
+import { toPerformance } from "../score/performance";
+import type { Score } from "../score/types";
 
 /** One note to sound, timed in quarter notes from the start of the score. */
 export interface PlaybackNote {

@@ -1,10 +1,10 @@
 import { createHash, randomBytes } from "node:crypto";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { z } from "zod";
-import { db as sharedDb, type Db } from "../db";
-import { invitation, membership } from "../db/schema";
-import { fail, fromZodError, ok, type ActionResult } from "./action-result";
-import { emailTaken, insertCredentialUser, NameField, PasswordField } from "./teacher-sign-up";
+import { db as sharedDb, type Db } from "../../db";
+import { invitation, membership } from "../../db/schema";
+import { fail, fromZodError, ok, type ActionResult } from "../action-result";
+import { emailTaken, insertCredentialUser, NameField, PasswordField } from "../auth/teacher-sign-up";
 
 /** How long an invitation link stays valid. */
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;

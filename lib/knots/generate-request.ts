@@ -4,7 +4,7 @@
  * so the form, the generate handler and sheet saving all agree on one shape.
  */
 import { z } from "zod";
-import { families } from "./drills/index";
+import { families } from "../drills/index";
 
 export const GenerateRequest = z
   .object({

@@ -3,9 +3,9 @@
  * generating drills, and a Score is plain read-only data. Keyed by piece id and its last change,
  * so an edited or replaced piece is read afresh; a few pieces at most are held.
  */
-import { Lru } from "./lru";
-import { readScore } from "./score/index";
-import type { Score } from "./score/types";
+import { Lru } from "../lru";
+import { readScore } from "../score/index";
+import type { Score } from "../score/types";
 
 const MAX_PIECES = 8;
 const scores = new Lru<string, Score>({ maxEntries: MAX_PIECES });

@@ -5,7 +5,7 @@
  * or a health professional.
  *
  * @example
- * import { CAUTION } from "./caution";
+ * import { CAUTION } from "../caution";
  * `${CAUTION.title}: ${CAUTION.text}`;
  */
 export const CAUTION = {

@@ -2,13 +2,13 @@
  * Drills for a stored knot: cut the knot's bars out of the piece's cleaned copy, run the chosen
  * families with the hand profile, and turn each drill into its browser JSON.
  */
-import { DEFAULT_PROFILE, generateDrills, type Drill, type HandProfile } from "./drills/index";
-import { drillKeys, toDrillDto, type DrillDto } from "./drill-dto";
+import { DEFAULT_PROFILE, generateDrills, type Drill, type HandProfile } from "../drills/index";
+import { drillKeys, toDrillDto, type DrillDto } from "./dto";
 import type { GenerateRequest } from "./generate-request";
-import { barIndex, selectPassage } from "./score/index";
-import type { Passage, Score } from "./score/types";
+import { barIndex, selectPassage } from "../score/index";
+import type { Passage, Score } from "../score/types";
 import { parsedScore } from "./score-cache";
-import { writeMusicXML } from "./score/write";
+import { writeMusicXML } from "../score/write";
 
 export interface KnotSource {
   musicxml: string;

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { fileStem } from "./drill-files";
+import { fileStem } from "./files";
 
 describe("fileStem", () => {
   test("accents fold to ASCII letters, punctuation goes, words join with one hyphen", () => {

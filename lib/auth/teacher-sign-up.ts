@@ -1,9 +1,9 @@
 import { hashPassword } from "better-auth/crypto";
 import { eq } from "drizzle-orm";
 import { z } from "zod";
-import type { Db } from "../db";
-import { account, membership, studio, user } from "../db/schema";
-import { fail, fromZodError, ok, type ActionResult } from "./action-result";
+import type { Db } from "../../db";
+import { account, membership, studio, user } from "../../db/schema";
+import { fail, fromZodError, ok, type ActionResult } from "../action-result";
 import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
 export const PasswordField = z

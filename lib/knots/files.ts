@@ -3,7 +3,7 @@
  * (a zip holding each drill in the three formats), with their content types and file names.
  */
 import { zipSync } from "fflate";
-import { readScore, writeMidi, writeMxl } from "./score/index";
+import { readScore, writeMidi, writeMxl } from "../score/index";
 
 export const DRILL_FORMATS = ["musicxml", "mxl", "midi"] as const;
 export type DrillFormat = (typeof DRILL_FORMATS)[number];

@@ -2,10 +2,10 @@
  * The JSON shape of a drill as the browser sees it: what the generate handler returns and what a
  * saved sheet drill is built from. One place turns a `Drill` (or a stored MusicXML score) into it.
  */
-import type { Drill, SpanReport } from "./drills/types";
-import { playbackEvents, type ScorePlayback } from "./playback";
-import type { Score } from "./score/types";
-import { writeMusicXML } from "./score/write";
+import type { Drill, SpanReport } from "../drills/types";
+import { playbackEvents, type ScorePlayback } from "../playback";
+import type { Score } from "../score/types";
+import { writeMusicXML } from "../score/write";
 
 /** A drill's notes to sound and its metre (see lib/playback). */
 export type PlaybackData = Pick<ScorePlayback, "events" | "beatsPerBar" | "beatUnitQ">;

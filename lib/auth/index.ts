@@ -1,10 +1,10 @@
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
-import { db } from "../db";
-import * as schema from "../db/schema";
-import { authSecret, readEnv } from "./env";
-import { resetPasswordMail, sendMail } from "./mail";
+import { db } from "../../db";
+import * as schema from "../../db/schema";
+import { authSecret, readEnv } from "../env";
+import { resetPasswordMail, sendMail } from "../mail";
 import { signInLimitHooks } from "./sign-in-limit";
 import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
