@@ -25,7 +25,7 @@ fi
 node scripts/copy-samples.mjs
 
 echo "Applying migrations and seeding the demo studio…"
-npx tsx db/seed.ts
+npx tsx scripts/db-seed.ts
 
 stale=0
 if [ ! -f .next/BUILD_ID ]; then

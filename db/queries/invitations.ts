@@ -1,8 +1,13 @@
+import { createHash } from "node:crypto";
 import { and, desc, eq, isNull } from "drizzle-orm";
-import { hashToken } from "../../lib/students/invitations";
 import { inStudio } from "../scope";
 import type { Db } from "../index";
 import { invitation, studio } from "../schema";
+
+/** Invitation tokens are stored only as their SHA-256 hash; look-ups hash the token from the link. */
+export function hashToken(token: string): string {
+  return createHash("sha256").update(token).digest("hex");
+}
 
 export type InvitationState = "valid" | "used" | "expired" | "unknown";
 

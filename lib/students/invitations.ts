@@ -1,17 +1,14 @@
-import { createHash, randomBytes } from "node:crypto";
+import { randomBytes } from "node:crypto";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import { z } from "zod";
 import { db as sharedDb, type Db } from "../../db";
+import { hashToken } from "../../db/queries/invitations";
 import { invitation, membership } from "../../db/schema";
 import { fail, fromZodError, ok, type ActionResult } from "../action-result";
 import { emailTaken, insertCredentialUser, NameField, PasswordField } from "../auth/teacher-sign-up";
 
 /** How long an invitation link stays valid. */
 export const INVITATION_TTL_MS = 7 * 24 * 60 * 60 * 1000;
-
-export function hashToken(token: string): string {
-  return createHash("sha256").update(token).digest("hex");
-}
 
 /** Creates an invitation for a student e-mail; returns the token to put in the link (stored only as a hash). */
 export async function createInvitation(

@@ -5,7 +5,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { CAUTION } from "@/lib/caution";
 import { describeViolations, seriousViolations } from "./axe";
 import { launchChromium, shoot } from "./chromium";
-import { DEMO_SHEET_TITLE } from "@/db/demo-sheet";
+import { DEMO_SHEET_TITLE } from "@/lib/demo/sheet";
 
 const baseURL = inject("baseURL");
 const NEW_STUDENT = { name: "Pia Newcomb", email: "pia.newcomb@knotwork.test", password: "scales-every-day" };

@@ -4,11 +4,11 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { countRows, useTempDatabase } from "./temp-db";
 
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
-let seed: typeof import("../../db/seed");
+let seed: typeof import("../../lib/demo/seed");
 
 beforeAll(async () => {
   t = await useTempDatabase("seed");
-  seed = await import("../../db/seed");
+  seed = await import("../../lib/demo/seed");
 });
 afterAll(() => t.cleanup());
 

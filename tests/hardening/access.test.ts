@@ -8,7 +8,7 @@ import { describe, expect, test } from "vitest";
 import { cookies, ids, isRefusal, probe, rowCounts, type Persona } from "./context";
 import { leakMarkers, leaksIn, PERSONA_LOGINS } from "./personas";
 import { appRoutes, PUBLIC_ROUTES, queryFor, urlFor, type AppRoute } from "./routes";
-import { DEMO_STUDENTS, DEMO_STUDIO, DEMO_TEACHER } from "../../db/seed";
+import { DEMO_STUDENTS, DEMO_STUDIO, DEMO_TEACHER } from "../../lib/demo/seed";
 
 const routes = appRoutes();
 /** Invitation links: open to whoever holds the token, so probed separately below. */

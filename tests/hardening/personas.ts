@@ -1,7 +1,7 @@
 /**
  * Who knocks on the doors in the hardening suite, and what must never show up in a refused answer.
  */
-import { DEMO_PASSWORD, DEMO_STUDENTS, DEMO_STUDIO, DEMO_TEACHER } from "../../db/seed";
+import { DEMO_PASSWORD, DEMO_STUDENTS, DEMO_STUDIO, DEMO_TEACHER } from "../../lib/demo/seed";
 
 export const OTHER_TEACHER = { name: "Perpetua Okonkwo-Vale", email: "perpetua@elsewhere.test", studioName: "Quillmere Studio" };
 export const OTHER_STUDENT = { name: "Ilse Marrowby", email: "ilse@elsewhere.test" };

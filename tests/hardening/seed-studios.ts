@@ -1,5 +1,5 @@
 /**
- * Seeds the hardening database: the demo studio (db/seed.ts), one saved drill sheet with an
+ * Seeds the hardening database: the demo studio (lib/demo/seed.ts), one saved drill sheet with an
  * assignment, a practice entry and an open invitation in it, and a second, unrelated studio with its
  * own teacher and student. Writes the ids the access-control suite maps route segments to.
  *
@@ -13,7 +13,7 @@ import { getKnotSource } from "../../db/queries/knot-drills";
 import { insertPracticeEntry } from "../../db/queries/practice";
 import { saveSheet } from "../../db/queries/sheets";
 import { createAssignments } from "../../db/queries/assignments";
-import { DEMO_PASSWORD, DEMO_STUDENTS, DEMO_TEACHER, seedDemo } from "../../db/seed";
+import { DEMO_PASSWORD, DEMO_STUDENTS, DEMO_TEACHER, seedDemo } from "../../lib/demo/seed";
 import { membership, passage, practiceEntry, score, sheetDrill, user } from "../../db/schema";
 import { acceptInvitation, createInvitation } from "../../lib/students/invitations";
 import { generateForKnot } from "../../lib/knots/generate";

@@ -26,7 +26,7 @@ let knotId: string;
 
 beforeAll(async () => {
   t = await useTempDatabase("generate-cache");
-  const seed = await import("../../db/seed");
+  const seed = await import("../../lib/demo/seed");
   ({ studioId } = await seed.seedDemo(t.db));
   route = await import("../../app/api/knots/[knotId]/drills/route");
   gen = await import("../../lib/knots/generate");

@@ -16,7 +16,7 @@ let teacherId: string;
 
 beforeAll(async () => {
   t = await useTempDatabase("sheets");
-  const seed = await import("../../db/seed");
+  const seed = await import("../../lib/demo/seed");
   ({ studioId } = await seed.seedDemo(t.db));
   sheets = await import("../../db/queries/sheets");
   knotQueries = await import("../../db/queries/knot-drills");

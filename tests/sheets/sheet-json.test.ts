@@ -16,13 +16,13 @@ vi.mock("next/headers", () => ({
 let t: Awaited<ReturnType<typeof useTempDatabase>>;
 let route: typeof import("../../app/api/sheets/[sheetId]/route");
 let schema: typeof import("../../db/schema");
-let seed: typeof import("../../db/seed");
+let seed: typeof import("../../lib/demo/seed");
 let sheetId: string;
 const cookies: Record<"teacher" | "assigned" | "unassigned" | "otherTeacher", string> = { teacher: "", assigned: "", unassigned: "", otherTeacher: "" };
 
 beforeAll(async () => {
   t = await useTempDatabase("sheet-json");
-  seed = await import("../../db/seed");
+  seed = await import("../../lib/demo/seed");
   await seed.seedDemo(t.db);
   schema = await import("../../db/schema");
   route = await import("../../app/api/sheets/[sheetId]/route");

@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { readEnv } from "../lib/env";
 
-/** Deletes the local SQLite file (and its WAL files), then migrates and seeds the demo studio again. */
+/** `npm run db:reset`: deletes the local SQLite file (and its WAL files), then migrates and seeds the demo studio again. */
 async function main() {
   const { DATABASE_URL } = readEnv();
   if (!DATABASE_URL.startsWith("file:")) {
@@ -11,9 +11,9 @@ async function main() {
   const file = path.resolve(DATABASE_URL.slice("file:".length).split("?")[0]);
   for (const f of [file, `${file}-wal`, `${file}-shm`]) fs.rmSync(f, { force: true });
   console.log(`Removed ${path.relative(process.cwd(), file)}.`);
-  const { db, dbClient } = await import("./index");
-  const { runMigrations } = await import("./migrate");
-  const { seedDemo } = await import("./seed");
+  const { db, dbClient } = await import("../db/index");
+  const { runMigrations } = await import("../db/migrate");
+  const { seedDemo } = await import("../lib/demo/seed");
   await runMigrations(db);
   await seedDemo(db);
   dbClient().close();

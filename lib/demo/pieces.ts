@@ -1,6 +1,6 @@
 import fs from "node:fs";
 import path from "node:path";
-import type { ScorePartSummary } from "./schema";
+import type { ScorePartSummary } from "../../db/schema";
 
 export interface DemoPiece {
   fileName: string;
@@ -49,7 +49,7 @@ export function summariseMusicXml(xml: string, fallbackTitle: string): Omit<Demo
 }
 
 /** The demo studio's pieces from fixtures/pieces, sorted by file name. */
-export function loadDemoPieces(dir = path.resolve(__dirname, "../fixtures/pieces")): DemoPiece[] {
+export function loadDemoPieces(dir = path.resolve(__dirname, "../../fixtures/pieces")): DemoPiece[] {
   if (!fs.existsSync(dir)) return [];
   return fs
     .readdirSync(dir)

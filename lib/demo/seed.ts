@@ -1,10 +1,9 @@
-import path from "node:path";
 import { and, eq } from "drizzle-orm";
-import { insertCredentialUser } from "../lib/auth/teacher-sign-up";
-import type { Db } from "./index";
-import { loadDemoPieces } from "./demo-pieces";
-import { seedDemoSheet } from "./demo-sheet";
-import { handProfile, membership, passage, score, studio, user } from "./schema";
+import { insertCredentialUser } from "../auth/teacher-sign-up";
+import type { Db } from "../../db/index";
+import { loadDemoPieces } from "./pieces";
+import { seedDemoSheet } from "./sheet";
+import { handProfile, membership, passage, score, studio, user } from "../../db/schema";
 
 /** Demo-only sign-ins, printed by `npm run demo`. Never use these anywhere real. */
 export const DEMO_PASSWORD = "practise-slowly";
@@ -95,21 +94,5 @@ export async function seedDemo(database: Db): Promise<{ studioId: string; pieces
       .limit(1);
     await seedDemoSheet(db, { studioId, teacherId, studentMembershipId: first?.id ?? null });
     return { studioId, pieces: pieces.length };
-  });
-}
-
-async function main() {
-  const { db, dbClient } = await import("./index");
-  const { runMigrations } = await import("./migrate");
-  await runMigrations(db);
-  const result = await seedDemo(db);
-  dbClient().close();
-  console.log(`Demo studio "${DEMO_STUDIO}" ready with ${result.pieces} pieces.`);
-}
-
-if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(__filename)) {
-  main().catch((err) => {
-    console.error(err);
-    process.exit(1);
   });
 }

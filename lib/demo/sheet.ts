@@ -3,10 +3,10 @@
  * pebble study, right hand), assigned to the first demo student with a few practice entries.
  */
 import { and, eq } from "drizzle-orm";
-import { generateForKnot } from "../lib/knots/generate";
-import { pickedDrills } from "../lib/sheets/save";
-import type { Db } from "./index";
-import { assignment, passage, practiceEntry, score, sheet, sheetDrill } from "./schema";
+import { generateForKnot } from "../knots/generate";
+import { pickedDrills } from "../sheets/save";
+import type { Db } from "../../db/index";
+import { assignment, passage, practiceEntry, score, sheet, sheetDrill } from "../../db/schema";
 
 export const DEMO_SHEET_TITLE = "Even triplets, bars 1–2";
 
