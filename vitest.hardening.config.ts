@@ -6,7 +6,13 @@ import path from "node:path";
  * and bundle sizes, all against the production build on a free loopback port with its own temp data.
  */
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(__dirname) } },
+  resolve: {
+    alias: {
+      "@": path.resolve(__dirname),
+      // Outside Next, "server-only" resolves to the guard that throws; tests run server code on purpose.
+      "server-only": path.resolve(__dirname, "node_modules/server-only/empty.js"),
+    },
+  },
   test: {
     pool: "forks",
     include: ["tests/hardening/**/*.test.ts"],
