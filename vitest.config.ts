@@ -1,15 +1,9 @@
 import { defineConfig } from "vitest/config";
-import path from "node:path";
+import { resolve } from "./vitest.shared";
 
 /** Unit and integration tests: pure lib/ tests plus db/actions tests against temp SQLite files. */
 export default defineConfig({
-  resolve: {
-    alias: {
-      "@": path.resolve(__dirname),
-      // Outside Next, "server-only" resolves to the guard that throws; tests run server code on purpose.
-      "server-only": path.resolve(__dirname, "node_modules/server-only/empty.js"),
-    },
-  },
+  resolve,
   test: {
     pool: "forks",
     include: ["lib/**/*.test.ts", "tests/**/*.test.ts"],
