@@ -68,7 +68,7 @@ export const auth = betterAuth({
       "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: env.AUTH_SIGN_IN_MAX },
     },
   },
-  // Per-account limit on failed sign-ins, whatever address the client claims (lib/sign-in-limit.ts).
+  // Per-account limit on failed sign-ins, whatever address the client claims (lib/auth/sign-in-limit.ts).
   hooks: signInLimitHooks,
   session: {
     expiresIn: 60 * 60 * 24 * 14,
