@@ -1,15 +1,12 @@
 import { defineConfig } from "vitest/config";
-import path from "node:path";
+import { buildSuite, resolve } from "./vitest.shared";
 
 /** Browser tests: a production build served on a free loopback port, driven by playwright-core + Debian chromium. */
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(__dirname) } },
+  resolve,
   test: {
-    pool: "forks",
+    ...buildSuite,
     include: ["tests/browser/**/*.test.ts"],
-    fileParallelism: false,
-    testTimeout: 180_000,
-    hookTimeout: 600_000,
     globalSetup: ["tests/browser/global-setup.ts"],
   },
 });

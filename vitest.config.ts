@@ -1,9 +1,9 @@
 import { defineConfig } from "vitest/config";
-import path from "node:path";
+import { resolve } from "./vitest.shared";
 
 /** Unit and integration tests: pure lib/ tests plus db/actions tests against temp SQLite files. */
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(__dirname) } },
+  resolve,
   test: {
     pool: "forks",
     include: ["lib/**/*.test.ts", "tests/**/*.test.ts"],

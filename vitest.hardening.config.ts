@@ -1,18 +1,15 @@
 import { defineConfig } from "vitest/config";
-import path from "node:path";
+import { buildSuite, resolve } from "./vitest.shared";
 
 /**
  * Hardening suite: hostile uploads, access control, security headers, crash safety, a load smoke run
  * and bundle sizes, all against the production build on a free loopback port with its own temp data.
  */
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(__dirname) } },
+  resolve,
   test: {
-    pool: "forks",
+    ...buildSuite,
     include: ["tests/hardening/**/*.test.ts"],
-    fileParallelism: false,
-    testTimeout: 180_000,
-    hookTimeout: 600_000,
     setupFiles: ["tests/setup.ts"],
     globalSetup: ["tests/hardening/global-setup.ts"],
   },

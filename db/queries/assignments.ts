@@ -1,7 +1,8 @@
 import { and, asc, desc, eq, inArray } from "drizzle-orm";
 import { inStudio } from "../scope";
+import { joinMemberUser, studentColumns } from "./joins";
 import type { Db } from "../index";
-import { assignment, membership, passage, practiceEntry, score, sheet, sheetDrill, user } from "../schema";
+import { assignment, membership, passage, score, sheet, sheetDrill, user } from "../schema";
 
 /** A student's assignments (their drill sheets), newest first. */
 export async function listAssignmentsForStudent(database: Db, studioId: string, membershipId: string) {
@@ -19,29 +20,9 @@ export async function listAssignmentsForStudent(database: Db, studioId: string, 
     .orderBy(desc(assignment.createdAt));
 }
 
-/** A student's practice entries, most recent day first. */
-export async function listPracticeForStudent(database: Db, studioId: string, membershipId: string) {
-  return database
-    .select({
-      id: practiceEntry.id,
-      assignmentId: practiceEntry.assignmentId,
-      practisedOn: practiceEntry.practisedOn,
-      minutes: practiceEntry.minutes,
-      ease: practiceEntry.ease,
-      tempos: practiceEntry.tempos,
-      comment: practiceEntry.comment,
-      sheetTitle: sheet.title,
-    })
-    .from(practiceEntry)
-    .innerJoin(assignment, eq(assignment.id, practiceEntry.assignmentId))
-    .innerJoin(sheet, eq(sheet.id, assignment.sheetId))
-    .where(inStudio(practiceEntry, studioId, eq(practiceEntry.studentMembershipId, membershipId)))
-    .orderBy(desc(practiceEntry.practisedOn), desc(practiceEntry.createdAt));
-}
-
 /** Every assignment of the studio with its student and sheet, newest first (the teacher's list). */
 export async function listAssignmentsForStudio(database: Db, studioId: string) {
-  return database
+  const query = database
     .select({
       id: assignment.id,
       sheetId: assignment.sheetId,
@@ -53,10 +34,8 @@ export async function listAssignmentsForStudio(database: Db, studioId: string) {
     })
     .from(assignment)
     .innerJoin(sheet, eq(sheet.id, assignment.sheetId))
-    .innerJoin(membership, eq(membership.id, assignment.studentMembershipId))
-    .innerJoin(user, eq(user.id, membership.userId))
-    .where(inStudio(assignment, studioId))
-    .orderBy(desc(assignment.createdAt));
+    .$dynamic();
+  return joinMemberUser(query, assignment.studentMembershipId).where(inStudio(assignment, studioId)).orderBy(desc(assignment.createdAt));
 }
 
 /**
@@ -70,7 +49,7 @@ export async function getAssignment(database: Db, studioId: string, assignmentId
     eq(assignment.id, assignmentId),
     studentMembershipId ? eq(assignment.studentMembershipId, studentMembershipId) : undefined,
   );
-  const [row] = await database
+  const query = database
     .select({
       assignment,
       sheetTitle: sheet.title,
@@ -85,10 +64,8 @@ export async function getAssignment(database: Db, studioId: string, assignmentId
     .innerJoin(sheet, eq(sheet.id, assignment.sheetId))
     .leftJoin(passage, eq(passage.id, sheet.passageId))
     .leftJoin(score, eq(score.id, passage.scoreId))
-    .innerJoin(membership, eq(membership.id, assignment.studentMembershipId))
-    .innerJoin(user, eq(user.id, membership.userId))
-    .where(where)
-    .limit(1);
+    .$dynamic();
+  const [row] = await joinMemberUser(query, assignment.studentMembershipId).where(where).limit(1);
   if (!row) return null;
   const drills = await database
     .select()
@@ -144,7 +121,7 @@ export async function createAssignments(database: Db, input: NewAssignments): Pr
 export async function studentsById(database: Db, studioId: string, membershipIds: readonly string[]) {
   if (membershipIds.length === 0) return [];
   return database
-    .select({ membershipId: membership.id, name: user.name, email: user.email })
+    .select(studentColumns)
     .from(membership)
     .innerJoin(user, eq(user.id, membership.userId))
     .where(and(eq(membership.studioId, studioId), eq(membership.role, "student"), inArray(membership.id, [...membershipIds])));

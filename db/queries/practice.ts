@@ -1,7 +1,8 @@
-import { asc, eq } from "drizzle-orm";
+import { asc, desc, eq } from "drizzle-orm";
 import { inStudio } from "../scope";
 import type { Db } from "../index";
-import { assignment, membership, practiceEntry, sheet, user } from "../schema";
+import { practiceEntry, sheet, user } from "../schema";
+import { joinEntrySheet, joinMemberUser, practiceColumns } from "./joins";
 
 export interface NewPracticeEntry {
   studioId: string;
@@ -30,24 +31,11 @@ export async function listPracticeEntries(
   studioId: string,
   filter: { studentMembershipId?: string; assignmentId?: string } = {},
 ) {
-  return database
-    .select({
-      id: practiceEntry.id,
-      assignmentId: practiceEntry.assignmentId,
-      studentMembershipId: practiceEntry.studentMembershipId,
-      studentName: user.name,
-      sheetTitle: sheet.title,
-      practisedOn: practiceEntry.practisedOn,
-      minutes: practiceEntry.minutes,
-      tempos: practiceEntry.tempos,
-      ease: practiceEntry.ease,
-      comment: practiceEntry.comment,
-    })
+  const query = database
+    .select({ ...practiceColumns, studentMembershipId: practiceEntry.studentMembershipId, studentName: user.name, sheetTitle: sheet.title })
     .from(practiceEntry)
-    .innerJoin(assignment, eq(assignment.id, practiceEntry.assignmentId))
-    .innerJoin(sheet, eq(sheet.id, assignment.sheetId))
-    .innerJoin(membership, eq(membership.id, practiceEntry.studentMembershipId))
-    .innerJoin(user, eq(user.id, membership.userId))
+    .$dynamic();
+  return joinMemberUser(joinEntrySheet(query), practiceEntry.studentMembershipId)
     .where(
       inStudio(
         practiceEntry,
@@ -57,4 +45,12 @@ export async function listPracticeEntries(
       ),
     )
     .orderBy(asc(practiceEntry.practisedOn), asc(practiceEntry.createdAt));
+}
+
+/** A student's own practice entries, most recent day first (their practice log). */
+export async function listPracticeForStudent(database: Db, studioId: string, membershipId: string) {
+  const query = database.select({ ...practiceColumns, sheetTitle: sheet.title }).from(practiceEntry).$dynamic();
+  return joinEntrySheet(query)
+    .where(inStudio(practiceEntry, studioId, eq(practiceEntry.studentMembershipId, membershipId)))
+    .orderBy(desc(practiceEntry.practisedOn), desc(practiceEntry.createdAt));
 }

@@ -1,5 +1,6 @@
 import { asc, eq } from "drizzle-orm";
 import { inStudio } from "../scope";
+import { studentColumns } from "./joins";
 import type { Db } from "../index";
 import { handProfile, membership, user } from "../schema";
 
@@ -7,9 +8,7 @@ import { handProfile, membership, user } from "../schema";
 export async function listStudents(database: Db, studioId: string) {
   return database
     .select({
-      membershipId: membership.id,
-      name: user.name,
-      email: user.email,
+      ...studentColumns,
       spanMm: handProfile.spanMm,
       octaveMm: handProfile.octaveMm,
     })

@@ -1,3 +1,16 @@
+/**
+ * Accounts, sign-in and sessions. Server only (`import "server-only"`), apart from the two
+ * client-safe files the browser forms import directly.
+ *
+ * - index.ts (this file): the better-auth instance `auth` (e-mail and password, cookie cache, limits)
+ * - session.ts: `requireUser` / `requireTeacher` / `requireStudent`, `getStudioContext` (once per request)
+ * - api-session.ts: the route-handler twins `apiMember` / `apiTeacher` (401 / 404, no redirects)
+ * - session-memo.ts, sign-in-limit.ts, rate-limit.ts: in-process memo and limits
+ * - teacher-sign-up.ts: the public sign-up, a teacher and a new studio in one transaction
+ * - client.ts (client-safe): plain POSTs to /api/auth for the sign-in, sign-out and reset forms
+ * - password-rules.ts (client-safe, pure): the password length limits
+ */
+import "server-only";
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
@@ -55,7 +68,7 @@ export const auth = betterAuth({
       "/sign-in/email": { window: env.AUTH_RATE_LIMIT_WINDOW, max: env.AUTH_SIGN_IN_MAX },
     },
   },
-  // Per-account limit on failed sign-ins, whatever address the client claims (lib/sign-in-limit.ts).
+  // Per-account limit on failed sign-ins, whatever address the client claims (lib/auth/sign-in-limit.ts).
   hooks: signInLimitHooks,
   session: {
     expiresIn: 60 * 60 * 24 * 14,

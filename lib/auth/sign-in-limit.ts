@@ -1,6 +1,6 @@
 /**
  * A per-account sign-in limit that does not depend on the caller's address: better-auth's own
- * limiter (and lib/rate-limit) key on the first X-Forwarded-For address, which a client can change
+ * limiter (and lib/auth/rate-limit) key on the first X-Forwarded-For address, which a client can change
  * on every request. Here failed passwords are counted per e-mail address in a fixed window; once an
  * address has used up its tries, every sign-in for it (even with the right password) answers 429
  * until the window ends. A successful sign-in clears the count. One process's memory.

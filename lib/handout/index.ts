@@ -1,6 +1,7 @@
 /**
- * Handouts (server only): drills engraved to SVG, and drill sheets as printable PDFs.
- * Imports jsdom, pdfkit and the engraver; never import this from client components.
+ * Handouts: drills engraved to SVG, and drill sheets as printable PDFs. A pure renderer (data in,
+ * SVG or PDF bytes out; no app service, no db), but Node only: it imports jsdom, pdfkit and the
+ * engraver, so never import it from client components.
  */
 export { renderDrillSvg, DEFAULT_DRILL_WIDTH_PX, type DrillSvgOptions } from "./render-drill-svg";
 export { renderHandoutPdf } from "./render-handout-pdf";

@@ -1,8 +1,9 @@
 /**
  * Outgoing e-mail. Every message is stored in the `outbox` table; when SMTP_URL is set it is also
  * delivered through nodemailer and marked sent. Without SMTP the outbox is the mailbox, viewable on
- * the development-only page /dev/outbox.
+ * the development-only page /dev/outbox. Server only (`import "server-only"`); templates.ts is pure.
  */
+import "server-only";
 import { eq } from "drizzle-orm";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db as sharedDb, type Db } from "../../db";

@@ -2,7 +2,7 @@
  * What a player needs to sound a score, a range of its bars or one hand: the one place that turns
  * the score model into playback events. Built on lib/score's `toPerformance`, so tied notes sound
  * once for their full merged length (`mergeTies`), grace notes take their short slot before the
- * beat and dynamics set the velocity.
+ * beat and dynamics set the velocity. Pure and client-safe: imports only lib/score.
  */
 import { toPerformance } from "../score/performance";
 import type { Score } from "../score/types";

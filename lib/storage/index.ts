@@ -1,3 +1,8 @@
+/**
+ * Uploaded files: one `FileStore` interface with a local-disk store and an UploadThing store, and
+ * the store the environment picks. Server only (`import "server-only"`).
+ */
+import "server-only";
 import path from "node:path";
 import { localStore } from "./local";
 import type { FileStore } from "./types";

@@ -40,7 +40,7 @@ export default async function setup(project: TestProject) {
     AUTH_RATE_LIMIT_MAX: "1000",
     AUTH_SIGN_IN_MAX: "1000",
   };
-  run(path.join(repoRoot, "node_modules/.bin/tsx"), ["db/seed.ts"], env);
+  run(path.join(repoRoot, "node_modules/.bin/tsx"), ["scripts/db-seed.ts"], env);
   const child = startNext(port, env, "inherit");
   await waitForHealth(url, child);
   project.provide("baseURL", url);

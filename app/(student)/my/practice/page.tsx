@@ -3,7 +3,7 @@ import Link from "next/link";
 import { Card, PageHeader } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { db } from "@/db";
-import { listPracticeForStudent } from "@/db/queries/assignments";
+import { listPracticeForStudent } from "@/db/queries/practice";
 import { requireStudent } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Practice log" };

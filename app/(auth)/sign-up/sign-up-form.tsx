@@ -1,8 +1,8 @@
 "use client";
 import { useActionState } from "react";
-import { signUpTeacher, type SignUpState } from "@/app/(auth)/sign-up/actions";
-import { Button } from "../ui/button";
-import { Field, FormMessage } from "../ui/field";
+import { signUpTeacher, type SignUpState } from "./actions";
+import { Button } from "@/components/ui/button";
+import { Field, FormMessage } from "@/components/ui/field";
 
 export function SignUpForm() {
   const [state, action, pending] = useActionState<SignUpState, FormData>(signUpTeacher, null);
