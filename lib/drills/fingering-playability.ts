@@ -58,7 +58,10 @@ export function playabilityFaults(events: readonly NoteEvent[], fingers: readonl
   };
   // Group by onset (grace notes alone).
   const groups: Struck[][] = [];
+  // A tie continuation whose start is not in these events (it began in the other hand) is held, not struck.
+  const continued = notes.filter((n) => n.e.tie === "stop" || n.e.tie === "continue");
   for (const n of notes) {
+    if (n.e.tie === "stop" || n.e.tie === "continue") continue;
     const last = groups.at(-1);
     if (last && !n.e.grace && !last[0]!.e.grace && Math.abs(last[0]!.start - n.start) < EPS) last.push(n);
     else groups.push([n]);
@@ -80,6 +83,7 @@ export function playabilityFaults(events: readonly NoteEvent[], fingers: readonl
   for (let k = 0; k < groups.length; k++) {
     const cur = groups[k]!;
     const t = cur[0]!.start;
+    sounding = [...sounding, ...continued.filter((a) => a.start <= t + EPS && a.start > (groups[k - 1]?.[0]?.start ?? -Infinity) + EPS)];
     sounding = sounding.filter((a) => a.end > t + EPS && held(a));
     // Held notes: struck earlier, still sounding when the group is struck.
     for (const a of sounding) {
