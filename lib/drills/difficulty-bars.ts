@@ -18,9 +18,39 @@ export interface BarFacts {
   readonly weakRepeats: number;
 }
 
+/** Share of a voice's notes one staff must hold to be the voice's home staff. */
+const HOME_SHARE = 0.75;
+
+/**
+ * Home staff of each voice of a part (key `part|voice`): the staff that holds at least 75% of the
+ * voice's notes. Notation programs keep a voice's number when its notes cross to the other staff of a
+ * piano part (a left-hand arpeggio written on the treble staff), so a note away from its voice's home
+ * staff is played by the home staff's hand. A voice spread evenly over both staves has no home.
+ *
+ * @example
+ * voiceHomes(score.events).get("P1|5") // 2
+ */
+export function voiceHomes(events: readonly NoteEvent[]): Map<string, number> {
+  const counts = new Map<string, Map<number, number>>();
+  for (const e of events) {
+    if (!e.pitch) continue;
+    const key = `${e.part}|${e.voice}`;
+    const byStaff = counts.get(key) ?? new Map<number, number>();
+    byStaff.set(e.staff, (byStaff.get(e.staff) ?? 0) + 1);
+    counts.set(key, byStaff);
+  }
+  const homes = new Map<string, number>();
+  for (const [key, byStaff] of counts) {
+    const total = [...byStaff.values()].reduce((a, b) => a + b, 0);
+    for (const [staff, n] of byStaff) if (n >= HOME_SHARE * total) homes.set(key, staff);
+  }
+  return homes;
+}
+
 /**
  * Split a score's notes by hand: in a part with two or more staves, staff 1 is the right hand and the
- * others the left; a one-staff part goes to the left hand under a bass (F) clef, else the right.
+ * others the left — a note that crossed from its voice's home staff (`voiceHomes`) goes with the home
+ * staff's hand; a one-staff part goes to the left hand under a bass (F) clef, else the right.
  *
  * @example
  * handsOf(score).get("P1")?.left.length
@@ -28,13 +58,14 @@ export interface BarFacts {
 export function handsOf(score: Score): Map<string, Record<Hand, NoteEvent[]>> {
   const out = new Map<string, Record<Hand, NoteEvent[]>>();
   const first = score.measures[0];
+  const homes = voiceHomes(score.events);
   for (const part of score.parts) out.set(part.id, { right: [], left: [] });
   for (const e of score.events) {
     const part = score.parts.find((p) => p.id === e.part);
     const slot = out.get(e.part);
     if (!part || !slot) continue;
     let hand: Hand = "right";
-    if (part.staves >= 2) hand = e.staff === 1 ? "right" : "left";
+    if (part.staves >= 2) hand = (homes.get(`${e.part}|${e.voice}`) ?? e.staff) === 1 ? "right" : "left";
     else if (first?.clefs.find((c) => c.staff === e.staff)?.sign === "F") hand = "left";
     slot[hand].push(e);
   }

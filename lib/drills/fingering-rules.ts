@@ -145,6 +145,17 @@ function orderedInterval(ma: number, fa: number, mb: number, fb: number, hand: H
   return fa <= fb ? handInterval(ma, mb, hand, model) : handInterval(mb, ma, hand, model);
 }
 
+/**
+ * The interval as the rules see it when the thumb reaches `thumbReach` semitones further under finger 3
+ * (or 3 over the thumb) than the span table allows (an extension, see fingering.ts; 0 = the published model).
+ */
+function reach(d: number, fa: number, fb: number, thumbReach: number): number {
+  if (thumbReach === 0 || d >= 0 || (fa !== 1 && fb !== 1)) return d;
+  // The thumb passes furthest under the middle finger, as in arpeggios (1-2-3-1); other pairs keep the table.
+  const other = fa === 1 ? fb : fa;
+  return other === 3 ? Math.min(0, d + thumbReach) : d;
+}
+
 /** Points for one finger on two different keys in a row (see `RuleCosts.sameFinger`). */
 export const SAME_FINGER_POINTS = 30;
 
@@ -155,13 +166,13 @@ export const SAME_FINGER_POINTS = 30;
  * @example
  * pairCosts(60, 1, 76, 5, "right", "parncutt").stretch // 2 × (16 − 13) = 6
  */
-export function pairCosts(ma: number, fa: number, mb: number, fb: number, hand: Hand, model: FingeringModel, into: RuleCosts = emptyCosts()): RuleCosts {
+export function pairCosts(ma: number, fa: number, mb: number, fb: number, hand: Hand, model: FingeringModel, into: RuleCosts = emptyCosts(), thumbReach = 0): RuleCosts {
   if (fa === fb) {
     if (ma !== mb) into.sameFinger += SAME_FINGER_POINTS;
     return into;
   }
   const span = pairSpan(fa, fb);
-  const d = orderedInterval(ma, fa, mb, fb, hand, model);
+  const d = reach(orderedInterval(ma, fa, mb, fb, hand, model), fa, fb, thumbReach);
   // Rule 1, Stretch: 2 points per semitone outside MinComf..MaxComf.
   if (d > span.maxComf) into.stretch += 2 * (d - span.maxComf);
   else if (d < span.minComf) into.stretch += 2 * (span.minComf - d);
@@ -197,9 +208,9 @@ export function pairCosts(ma: number, fa: number, mb: number, fb: number, hand: 
  * @example
  * trioCosts(60, 1, 64, 3, 72, 1, "right", "parncutt").positionChangeCount // 1 (half change)
  */
-export function trioCosts(m1: number, f1: number, m2: number, f2: number, m3: number, f3: number, hand: Hand, model: FingeringModel, into: RuleCosts = emptyCosts()): RuleCosts {
+export function trioCosts(m1: number, f1: number, m2: number, f2: number, m3: number, f3: number, hand: Hand, model: FingeringModel, into: RuleCosts = emptyCosts(), thumbReach = 0): RuleCosts {
   const span = pairSpan(f1, f3);
-  const d = orderedInterval(m1, f1, m3, f3, hand, model);
+  const d = reach(orderedInterval(m1, f1, m3, f3, hand, model), f1, f3, thumbReach);
   const outside = d > span.maxComf ? d - span.maxComf : d < span.minComf ? span.minComf - d : 0;
   if (outside > 0) {
     const between = (m2 - m1) * (m2 - m3) < 0;

@@ -3,7 +3,7 @@
  * estimated fingering for notes the score left unfingered.
  */
 import type { Hand, NoteEvent, Passage, Pitch } from "../score/types";
-import type { HandProfile, SpanReport } from "./types";
+import type { FingeringMemo, HandProfile, SpanReport } from "./types";
 import { DEFAULT_PROFILE, spanOf } from "./hand";
 import { estimateFingering } from "./fingering";
 import { mergeTies } from "../score/ties";
@@ -55,14 +55,7 @@ export function pitchSpan(pitches: readonly Pitch[], profile: HandProfile): Span
   return spanOf(pitches.map((p) => ({ midi: p.midi })), null, profile);
 }
 
-/**
- * Fingering work shared by the drills of one `generateDrills` call: the passage's own estimate per
- * hand (by passage object) and finished estimates per hand and note sequence.
- */
-export interface FingeringMemo {
-  readonly passage: WeakMap<Passage, Map<Hand, ReadonlyMap<string, number>>>;
-  readonly sequences: Map<string, readonly (number | null)[]>;
-}
+export type { FingeringMemo } from "./types";
 
 /**
  * An empty fingering memo.

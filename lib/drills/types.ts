@@ -1,9 +1,19 @@
 /**
  * Shared shapes of the drill library: every family has the same signature and returns `Drill`s.
+ * Types that several modules of lib/drills need live here; this file imports nothing from lib/drills,
+ * so it can never close an import circle (import-cycles.test.ts checks the whole folder).
  */
 import type { z } from "zod";
 import type { Hand, Passage, Score } from "../score/types";
-import type { FingeringMemo } from "./span";
+
+/**
+ * Fingering work shared by the drills of one `generateDrills` call: the passage's own estimate per
+ * hand (by passage object) and finished estimates per hand and note sequence (span.ts fills it).
+ */
+export interface FingeringMemo {
+  readonly passage: WeakMap<Passage, Map<Hand, ReadonlyMap<string, number>>>;
+  readonly sequences: Map<string, readonly (number | null)[]>;
+}
 
 /** Problem tags a teacher puts on a knot (trade words). */
 export const PROBLEM_TAGS = [

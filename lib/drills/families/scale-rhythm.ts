@@ -11,6 +11,7 @@ import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { buildDrill, passageHands, restSlot, type Slot } from "../build";
 import { beatLength, groupSonorities, placeInBar } from "../groups";
 import { keyTonic, pitchFromName } from "../spell";
+import { scaleFingers } from "../scale-fingerings";
 
 export const scaleRhythmOptions = z.object({
   /** Minor keys use this form of the minor scale. */
@@ -50,26 +51,15 @@ export function beatPattern(passage: Passage, hand: Hand, ctx: DrillContext): Be
 }
 
 /**
- * Standard two-octave scale fingering, ascending, for the keys that share the common patterns
- * (common practice; from memory): C, G, D, A, E (major and minor) — right hand 123 1234 …, left
- * hand 54321 321 …; B major left hand 4321 4321 …; F major right hand 1234 123 …. Other keys get
- * the estimated fingering.
+ * Standard two-octave scale fingering, up and back down (29 fingers, the notes of `twoOctaveScale`),
+ * from the scale-book table in scale-fingerings.ts (all 24 keys; common practice). Null for an unknown tonic.
  *
  * @example
- * scaleFingering("C", "major", "right"); // [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5]
+ * scaleFingering("C", "major", "right")?.slice(0, 15); // [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5]
  */
-export function scaleFingering(tonic: string, mode: string, hand: Hand): number[] | null {
-  const common = ["C", "G", "D", "A", "E"].includes(tonic);
-  const rightC = [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5];
-  const leftC = [5, 4, 3, 2, 1, 3, 2, 1, 4, 3, 2, 1, 3, 2, 1];
-  if (hand === "right") {
-    if (common || (tonic === "B" && mode === "major")) return rightC;
-    if (tonic === "F" && mode === "major") return [1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 4];
-    return null;
-  }
-  if (common || (tonic === "F" && mode === "major")) return leftC;
-  if (tonic === "B" && mode === "major") return [4, 3, 2, 1, 4, 3, 2, 1, 3, 2, 1, 4, 3, 2, 1];
-  return null;
+export function scaleFingering(tonic: string, mode: string, hand: Hand, minorForm: ScaleRhythmOptions["minorForm"] = "harmonic"): number[] | null {
+  const fingers = scaleFingers(tonic, mode === "minor" ? `${minorForm} minor` : "major", hand, 2);
+  return fingers ? [...fingers.up, ...fingers.down.slice(1)] : null;
 }
 
 /**
@@ -90,8 +80,8 @@ export function twoOctaveScale(key: Passage["key"], octave: number, minorForm: S
 
 function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options: ScaleRhythmOptions): Slot[] {
   const names = twoOctaveScale(passage.key, hand === "right" ? 4 : 2, options.minorForm);
-  const fingers = scaleFingering(keyTonic(passage.key), passage.key.mode, hand);
-  const fingerAt = (i: number) => (fingers ? (i < 15 ? fingers[i] : fingers[28 - i]) : undefined);
+  const fingers = scaleFingering(keyTonic(passage.key), passage.key.mode, hand, options.minorForm);
+  const fingerAt = (i: number) => fingers?.[i];
   const slots: Slot[] = [];
   const tuplet = pattern.tuplet;
   let k = 0;
