@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { families, generateDrills, suggestFamilies } from "./index";
 import { SUGGESTIONS } from "./suggest";
 import { makePassage } from "./test-passages";
-import { PROBLEM_TAGS } from "./types";
+import { PROBLEM_TAGS, type DrillFamily } from "./types";
 
 // The fourteen generator rows of the drill-family table (DESIGN.md); the short-ending row is an option.
 const IDS = [
@@ -33,6 +33,28 @@ describe("drill registry", () => {
     expect(drills.every((d) => d.family === "blocking")).toBe(true);
     expect(skipped.map((s) => s.family)).toEqual(["pivot-walk", "no-such-family"]);
     expect(skipped.every((s) => s.reason.length > 0)).toBe(true);
+  });
+
+  test("a family that throws is skipped with its reason, and the other families still generate", () => {
+    const registry = families as Record<string, DrillFamily>;
+    registry["test-throws"] = {
+      ...families.blocking,
+      id: "test-throws",
+      generate: () => {
+        throw new Error("duration 683/1024 cannot be written");
+      },
+    } as DrillFamily;
+    try {
+      const p = makePassage({ right: "C4/4 D4/4 E4/4 F4/4" });
+      const { drills, skipped } = generateDrills(p, { families: ["test-throws", "blocking"] });
+      expect(drills.length).toBeGreaterThan(0);
+      expect(drills.every((d) => d.family === "blocking")).toBe(true);
+      expect(skipped).toHaveLength(1);
+      expect(skipped[0].family).toBe("test-throws");
+      expect(skipped[0].reason).toContain("683/1024 cannot be written");
+    } finally {
+      delete registry["test-throws"];
+    }
   });
 
   test("options are validated by the family's schema; the same seed gives the same drills", () => {

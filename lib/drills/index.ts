@@ -66,6 +66,12 @@ export interface GenerateResult {
   readonly skipped: { readonly family: string; readonly reason: string }[];
 }
 
+/** A readable reason from whatever a family threw. */
+function reasonOf(error: unknown): string {
+  const message = error instanceof Error ? error.message : String(error);
+  return message.trim() || "an unexpected error";
+}
+
 function hashId(id: string): number {
   let h = 2166136261;
   for (const ch of id) h = Math.imul(h ^ ch.charCodeAt(0), 16777619);
@@ -74,7 +80,8 @@ function hashId(id: string): number {
 
 /**
  * Run the chosen families (default: all) on a passage. Returns the drills and, rather than
- * failing, a `skipped` list naming each family that does not apply and why. Each family draws
+ * failing, a `skipped` list naming each family that does not apply and why; a family that throws is
+ * skipped with the error's message as the reason, and the others still generate. Each family draws
  * from its own random source derived from `seed`, so adding a family never changes the others.
  * Invalid options throw the schema's `ZodError`.
  *
@@ -95,8 +102,17 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     }
     const options = family.options.parse(opts.options?.[id] ?? {});
     const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo });
-    const result = family.generate(passage, options, ctx);
-    drills.push(...withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }));
+    let result: ReturnType<DrillFamily["generate"]>;
+    let written: Drill[];
+    try {
+      result = family.generate(passage, options, ctx);
+      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false });
+    } catch (error) {
+      // A family that cannot write something in this passage is skipped; the others still generate.
+      skipped.push({ family: id, reason: `This drill could not be written for these bars: ${reasonOf(error)}` });
+      continue;
+    }
+    drills.push(...written);
     if (result.drills.length === 0) skipped.push({ family: id, reason: result.skipped ?? "No drill of this family fits the passage." });
   }
   return { drills, skipped };

@@ -83,13 +83,14 @@ const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
 
 /**
  * Append one part's events to `out` ordered by onset, then staff, then pitch (rests first); stable
- * otherwise. Sorts an index array on precomputed keys rather than the events themselves.
+ * otherwise. Grace notes come first at their onset and staff, in written order. Sorts an index array on precomputed keys rather than the events themselves.
  */
 function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
   const n = events.length;
   const t = new Float64Array(n);
   const staff = new Float64Array(n);
   const midi = new Float64Array(n);
+  const grace = new Uint8Array(n);
   // A float of n/d with n and d below 2^53 is correctly rounded, so when two such floats differ
   // they order the exact values; otherwise the exact comparison decides.
   const floatExact = new Uint8Array(n);
@@ -101,6 +102,7 @@ function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
     floatExact[i] = e.onset.n <= SAFE && e.onset.d <= SAFE ? 1 : 0;
     staff[i] = e.staff;
     midi[i] = e.pitch?.midi ?? -1;
+    grace[i] = e.grace ? 1 : 0;
     order[i] = i;
     if (sorted && i > 0 && compare(i - 1, i) > 0) sorted = false;
   }
@@ -111,6 +113,9 @@ function sortEvents(events: readonly NoteEvent[], out: NoteEvent[]): void {
       if (exact !== 0) return exact;
     }
     if (staff[a] !== staff[b]) return staff[a] - staff[b];
+    // Grace notes come before the note they lead to, in the order they were written.
+    if (grace[a] !== grace[b]) return grace[b] - grace[a];
+    if (grace[a]) return a - b;
     return midi[a] !== midi[b] ? midi[a] - midi[b] : a - b;
   }
   if (!sorted) order.sort(compare);

@@ -53,6 +53,12 @@ export interface Cursor {
   readonly pitches: Map<number, Pitch>;
   /** Written forms without a tuplet already made in this part: note type → by number of dots. */
   readonly writtens: Map<string | null, Written[]>;
+  /** Exact durations implied by type, dots and time-modification, by their key (see read-snap.ts). */
+  readonly snaps: Map<string, Fraction | null>;
+  /** Notes of the current bar whose `<duration>` was snapped to the exact value. */
+  snapCount: number;
+  /** Note onsets and ends of the current bar (exact), once a note was snapped; backups land on them. */
+  readonly boundaries: Fraction[];
 }
 
 /**
@@ -68,7 +74,7 @@ export function newCursor(part: RawPart): Cursor {
     state: { key: { fifths: 0, mode: "major" }, time: { beats: 4, beatType: 4 }, clefs: [] },
     measure: null, measureIndex: -1, shift: new Map(), transpose: 0,
     pendingDynamic: new Map(), pendingWords: new Map(), durations: new Map(), offsets: new Map(), cacheUnit: 1,
-    pitches: new Map(), writtens: new Map(),
+    pitches: new Map(), writtens: new Map(), snaps: new Map(), snapCount: 0, boundaries: [],
   };
 }
 
@@ -95,6 +101,8 @@ export function startBar(c: Cursor): void {
   c.pos = ZERO;
   c.lastOnset = ZERO;
   c.length = ZERO;
+  c.snapCount = 0;
+  c.boundaries.length = 0;
 }
 
 /** Leave integer ticks for the rest of the bar. */
@@ -132,6 +140,7 @@ function refine(c: Cursor, d: number): boolean {
 export function setDivisions(c: Cursor, divisions: number): void {
   c.divisions = divisions;
   c.durations.clear();
+  c.snaps.clear();
   if (c.posT === 0 && c.lengthT === 0 && c.lastOnsetT === 0 && c.unit !== 0) startBar(c);
   else if (Number.isInteger(divisions)) refine(c, divisions);
   else toFractions(c);
@@ -278,4 +287,42 @@ export function lastOnset(c: Cursor): Fraction {
  */
 export function barSoFar(c: Cursor): Fraction {
   return c.unit === 0 ? c.length : timeAt(c, c.lengthT);
+}
+
+/**
+ * Use an exact time instead of the one `toTime` returned last: `c.ticks` is recomputed for it, so the
+ * next `advance` or `back` moves by the exact value.
+ *
+ * @example
+ * toTime(c, 171, "note"); useExact(c, q(1, 6)); advance(c, q(1, 6));
+ */
+export function useExact(c: Cursor, time: Fraction): void {
+  c.ticks = Number.NaN;
+  if (c.unit === 0) return;
+  if (refine(c, Number(time.d))) c.ticks = Number(time.n) * (c.unit / Number(time.d));
+  if (!Number.isSafeInteger(c.ticks) || !Number.isSafeInteger(c.posT + c.ticks)) {
+    toFractions(c);
+    c.ticks = Number.NaN;
+  }
+}
+
+/**
+ * Put the cursor at an exact position of the current bar (used to land a rounded `<backup>` or
+ * `<forward>` on a note boundary).
+ *
+ * @example
+ * moveTo(c, ZERO); // back at the bar start
+ */
+export function moveTo(c: Cursor, time: Fraction): void {
+  if (c.unit !== 0 && refine(c, Number(time.d))) {
+    const t = Number(time.n) * (c.unit / Number(time.d));
+    if (Number.isSafeInteger(t)) {
+      c.posT = t;
+      if (c.posT > c.lengthT) c.lengthT = c.posT;
+      return;
+    }
+    toFractions(c);
+  }
+  c.pos = time;
+  c.length = maxTime(c.length, c.pos);
 }

@@ -47,6 +47,11 @@ export const FERMATA = 42;
 export const ACCENT = 43;
 export const STACCATO = 44;
 export const TENUTO = 45;
+export const TUPLET = 46;
+export const TREMOLO = 47;
+export const ARPEGGIATE = 48;
+export const NON_ARPEGGIATE = 49;
+export const TIED = 80;
 // <attributes>.
 export const ATTRIBUTES = 50;
 export const DIVISIONS = 51;
@@ -82,15 +87,16 @@ const CODES = new Map<string, number>([
   ["staff", STAFF], ["type", TYPE], ["time-modification", TIME_MODIFICATION], ["actual-notes", ACTUAL_NOTES],
   ["normal-notes", NORMAL_NOTES], ["technical", TECHNICAL], ["fingering", FINGERING], ["dynamics", DYNAMICS],
   ["other-dynamics", OTHER_DYNAMICS], ["chord", CHORD], ["grace", GRACE], ["cue", CUE], ["rest", REST],
-  ["unpitched", UNPITCHED], ["dot", DOT], ["tie", TIE], ["fermata", FERMATA], ["accent", ACCENT],
-  ["staccato", STACCATO], ["tenuto", TENUTO],
+  ["unpitched", UNPITCHED], ["dot", DOT], ["tie", TIE], ["tied", TIED], ["fermata", FERMATA], ["accent", ACCENT],
+  ["staccato", STACCATO], ["tenuto", TENUTO], ["tuplet", TUPLET], ["tremolo", TREMOLO],
+  ["arpeggiate", ARPEGGIATE], ["non-arpeggiate", NON_ARPEGGIATE],
   ["attributes", ATTRIBUTES], ["divisions", DIVISIONS], ["fifths", FIFTHS], ["mode", MODE], ["beats", BEATS],
   ["beat-type", BEAT_TYPE], ["senza-misura", SENZA_MISURA], ["staves", STAVES], ["clef", CLEF], ["sign", SIGN],
   ["line", LINE], ["clef-octave-change", CLEF_OCTAVE_CHANGE], ["transpose", TRANSPOSE], ["chromatic", CHROMATIC],
   ["octave-change", OCTAVE_CHANGE],
   ["direction", DIRECTION], ["words", WORDS], ["octave-shift", OCTAVE_SHIFT], ["beat-unit", BEAT_UNIT],
   ["beat-unit-dot", BEAT_UNIT_DOT], ["per-minute", PER_MINUTE],
-  ["tremolo", UNSUPPORTED], ["glissando", UNSUPPORTED], ["slide", UNSUPPORTED], ["figured-bass", UNSUPPORTED],
+  ["glissando", UNSUPPORTED], ["slide", UNSUPPORTED], ["figured-bass", UNSUPPORTED],
   ["harmon-mute", UNSUPPORTED], ["multiple-rest", UNSUPPORTED],
 ]);
 
@@ -116,7 +122,7 @@ export function elementCode(name: string): number {
 export function carriesText(code: number): boolean {
   switch (code) {
     case STEP: case ALTER: case OCTAVE: case DURATION: case VOICE: case STAFF: case TYPE:
-    case ACTUAL_NOTES: case NORMAL_NOTES: case FINGERING: case OTHER_DYNAMICS:
+    case ACTUAL_NOTES: case NORMAL_NOTES: case FINGERING: case OTHER_DYNAMICS: case TREMOLO:
     case DIVISIONS: case FIFTHS: case MODE: case BEATS: case BEAT_TYPE: case STAVES: case SIGN:
     case LINE: case CLEF_OCTAVE_CHANGE: case CHROMATIC: case OCTAVE_CHANGE:
     case WORDS: case BEAT_UNIT: case PER_MINUTE:

@@ -8,9 +8,10 @@ import { advance, lastOnset, markOnset, position, toTime, type Cursor } from "./
 import {
   ACCENT, ACTUAL_NOTES, ALTER, CHORD, CUE, DOT, DURATION, DYNAMICS, FERMATA, FINGERING, GRACE, NORMAL_NOTES,
   NOTE, OCTAVE, OTHER_DYNAMICS, PITCH, REST, STACCATO, STAFF, STEP, TECHNICAL, TENUTO, TIE, TIME_MODIFICATION,
-  TYPE, UNPITCHED, VOICE,
+  TYPE, UNPITCHED, VOICE, TUPLET, TREMOLO, ARPEGGIATE, NON_ARPEGGIATE, TIED,
 } from "./read-names";
 import { newNoteDraft, resetNoteDraft, type NoteDraft, type RawEvent, type RawScore, type ReadLimits } from "./read-types";
+import { noteBoundary, snapDuration } from "./read-snap";
 import { warn } from "./read-warnings";
 import { ZERO } from "./time";
 import type { NoteMark, Pitch, TieFlag, Written } from "./types";
@@ -52,7 +53,10 @@ function addMark(n: NoteState, mark: NoteMark): void {
 export function openNoteChild(n: NoteState, code: number, attrs: Record<string, string>): void {
   switch (code) {
     case CHORD: n.chord = true; break;
-    case GRACE: n.grace = true; break;
+    case GRACE:
+      n.grace = true;
+      if (attrs.slash === "yes") n.graceSlash = true;
+      break;
     case CUE: n.cue = true; break;
     case REST: n.rest = true; break;
     case UNPITCHED: n.unpitched = true; break;
@@ -65,6 +69,15 @@ export function openNoteChild(n: NoteState, code: number, attrs: Record<string, 
     case ACCENT: addMark(n, "accent"); break;
     case STACCATO: addMark(n, "staccato"); break;
     case TENUTO: addMark(n, "tenuto"); break;
+    case TUPLET:
+      if (attrs.type === "start" || attrs.type === "stop") (n.tuplets ??= []).push(attrs.type);
+      break;
+    case ARPEGGIATE:
+      n.arpeggio = attrs.direction === "up" || attrs.direction === "down" ? attrs.direction : "arpeggiate";
+      break;
+    case NON_ARPEGGIATE: n.arpeggio = "non-arpeggiate"; break;
+    // A tie to nothing (MusicXML 4.0 <tied type="let-ring">): the note rings on; read as a tie start.
+    case TIED: if (attrs.type === "let-ring") n.tieStart = true; break;
   }
 }
 
@@ -89,6 +102,12 @@ export function closeNoteChild(
     case TYPE: if (parent === NOTE) n.type = value; break;
     case ACTUAL_NOTES: if (parent === TIME_MODIFICATION) n.actual = Number(value); break;
     case NORMAL_NOTES: if (parent === TIME_MODIFICATION) n.normal = Number(value); break;
+    case TREMOLO: {
+      const type = attrs.type === "start" || attrs.type === "stop" || attrs.type === "unmeasured" ? attrs.type : "single";
+      const marks = Number(value || 3);
+      n.tremolo = { type, marks: Number.isInteger(marks) && marks >= 0 && marks <= 8 ? marks : 3 };
+      break;
+    }
     case FINGERING:
       if (parent === TECHNICAL) {
         const finger = Number(value);
@@ -167,7 +186,7 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
         });
       }
       duration = c.lastDuration;
-    } else duration = toTime(c, n.duration, "note");
+    } else duration = snapDuration(n, c, raw, toTime(c, n.duration, "note"));
   }
   let offset: Fraction;
   if (n.chord) offset = lastOnset(c);
@@ -177,6 +196,7 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
     c.lastDuration = duration;
     if (!n.grace) advance(c, duration);
   }
+  if (c.snapCount > 0 && !n.grace) noteBoundary(c, offset, duration);
   if (n.cue) {
     warn(raw, "cue-note", "Cue notes are not played and were left out", c.measureIndex, "cue");
     return;
@@ -219,7 +239,17 @@ export function finishNote(n: NoteState, c: Cursor, raw: RawScore, counter: { no
     chord: n.chord,
     tie,
   };
-  if (n.grace) event.grace = true;
+  if (n.grace) {
+    event.grace = true;
+    if (n.graceSlash) event.graceSlash = true;
+  }
+  if (n.tuplets !== null) event.tuplets = n.tuplets;
+  if (n.tremolo !== null) event.tremolo = n.tremolo;
+  if (n.arpeggio !== null) event.arpeggio = n.arpeggio;
+  if (c.shift.size > 0) {
+    const shift = c.shift.get(n.staff);
+    if (shift) event.octaveShift = shift;
+  }
   if (n.fingering !== null) {
     event.fingering = n.fingering;
     event.fingeringSource = "score";

@@ -6,7 +6,8 @@
 import { SaxesParser } from "saxes";
 import { ScoreError } from "./errors";
 import { ZERO } from "./time";
-import { advance, back, barSoFar, newCursor, startBar, toTime, type Cursor } from "./read-cursor";
+import { advance, back, barSoFar, newCursor, position, startBar, toTime, type Cursor } from "./read-cursor";
+import { landOnBoundary } from "./read-snap";
 import { closeNoteChild, finishNote, newNoteState, openNoteChild, resetNoteState } from "./read-note";
 import {
   closeAttributesChild, closeDirectionChild, finishAttributes, finishDirection, newAttrDraft,
@@ -251,10 +252,12 @@ function openMeasure(c: Cursor, attrs: Record<string, string>, limits: ReadLimit
 function moveCursor(c: Cursor, kind: "backup" | "forward", duration: number, raw: RawScore): void {
   if (duration === 0) return;
   const by = toTime(c, duration, kind);
+  const before = kind === "backup" && c.snapCount > 0 ? position(c) : null;
   if (kind === "forward") advance(c, by);
-  else if (!back(c, by)) {
+  else if (!back(c, by) && !(before && by.sub(before).mul(c.divisions).compare(c.snapCount) < 0)) {
     warn(raw, "backup-before-bar", "A <backup> goes before the start of the bar; clamped to the bar start", c.measureIndex, "backup");
   }
+  landOnBoundary(c);
 }
 
 function setTempo(m: RawMeasure, bpm: number, fromSound: boolean): void {

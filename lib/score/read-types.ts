@@ -4,7 +4,7 @@
  */
 import type Fraction from "fraction.js";
 import type {
-  AttributeChange, Clef, Fingering, KeySignature, NoteEvent, NoteMark, RepeatMarks, ScoreWarning, TimeSignature,
+  Tremolo, AttributeChange, Clef, Fingering, KeySignature, NoteEvent, NoteMark, RepeatMarks, ScoreWarning, TimeSignature,
 } from "./types";
 
 /** Limits on what one file may hold. */
@@ -92,6 +92,11 @@ export interface NoteDraft {
   /** Null until the note has a mark. */
   marks: NoteMark[] | null;
   dynamic: string | undefined;
+  graceSlash: boolean;
+  /** Null until the note has a `<tuplet>` start or stop. */
+  tuplets: ("start" | "stop")[] | null;
+  tremolo: Tremolo | null;
+  arpeggio: NoteEvent["arpeggio"] | null;
 }
 
 /**
@@ -104,7 +109,8 @@ export function newNoteDraft(): NoteDraft {
   return {
     chord: false, grace: false, cue: false, rest: false, unpitched: false, step: "", alter: 0, octave: 4,
     duration: null, voice: "1", staff: 1, type: null, dots: 0, actual: 0, normal: 0, tieStart: false,
-    tieStop: false, fingering: null, marks: null, dynamic: undefined,
+    tieStop: false, fingering: null, marks: null, dynamic: undefined, graceSlash: false, tuplets: null,
+    tremolo: null, arpeggio: null,
   };
 }
 
@@ -120,4 +126,5 @@ export function resetNoteDraft(n: NoteDraft): void {
   n.step = ""; n.alter = 0; n.octave = 4; n.duration = null; n.voice = "1"; n.staff = 1; n.type = null;
   n.dots = 0; n.actual = 0; n.normal = 0; n.tieStart = false; n.tieStop = false;
   n.fingering = null; n.marks = null; n.dynamic = undefined;
+  n.graceSlash = false; n.tuplets = null; n.tremolo = null; n.arpeggio = null;
 }

@@ -73,6 +73,22 @@ export interface NoteEvent {
   readonly dynamic?: string;
   /** Drill instruction text written above this note. */
   readonly words?: string;
+  /** A grace note written with a slash (an acciaccatura). Graces keep their written order at one onset. */
+  readonly graceSlash?: boolean;
+  /** Tuplet brackets as the file wrote them on this note (`<tuplet type>`); the writer follows them. */
+  readonly tuplets?: readonly ("start" | "stop")[];
+  /** A tremolo: one note repeated ("single"), or two notes alternated ("start" on the first, "stop" on the second). */
+  readonly tremolo?: Tremolo;
+  /** An arpeggio sign on this chord note (rolled, optionally up or down) or a non-arpeggio bracket. */
+  readonly arpeggio?: "arpeggiate" | "up" | "down" | "non-arpeggiate";
+  /** Octave line in force on this note's staff, in semitones written below the sound (8va = 12, 8vb = −12). */
+  readonly octaveShift?: number;
+}
+
+/** MusicXML `<tremolo>`: its type and the number of strokes (1 = eighths, 2 = sixteenths, 3 = 32nds). */
+export interface Tremolo {
+  readonly type: "single" | "start" | "stop" | "unmeasured";
+  readonly marks: number;
 }
 
 export type NoteMark = "fermata" | "accent" | "staccato" | "tenuto" | "diamond";
@@ -156,7 +172,7 @@ export interface Score {
   readonly parts: readonly PartInfo[];
   /** Measures are shared by all parts (partwise files keep them aligned). */
   readonly measures: readonly Measure[];
-  /** All events of all parts, ordered by part, then onset, then staff, then pitch. */
+  /** All events of all parts, ordered by part, then onset, then staff, then pitch (grace notes first, in written order). */
   readonly events: readonly NoteEvent[];
 }
 

@@ -82,7 +82,7 @@ function beamGroup(group: Slot[]): void {
 export function assignTuplets(slots: readonly Slot[]): void {
   let i = 0;
   while (i < slots.length) {
-    const t = slots[i].grace ? null : slots[i].pieces[0].tuplet;
+    const t = bracketable(slots[i]) ? slots[i].pieces[0].tuplet : null;
     if (!t) {
       i++;
       continue;
@@ -90,7 +90,7 @@ export function assignTuplets(slots: readonly Slot[]): void {
     let j = i;
     while (
       j + 1 < slots.length &&
-      !slots[j + 1].grace &&
+      bracketable(slots[j + 1]) &&
       sameRatio(slots[j + 1].pieces[0].tuplet, t) &&
       slots[j].onset.add(slots[j].advance).equals(slots[j + 1].onset)
     ) {
@@ -104,18 +104,47 @@ export function assignTuplets(slots: readonly Slot[]): void {
     const unit = shortest ? shortest.mul(t.normal) : null;
     let start = 0;
     let filled = new Fraction(0);
+    const close = (k: number) => {
+      run[start].tuplet.push("start");
+      run[k].tuplet.push("stop");
+      start = k + 1;
+      filled = new Fraction(0);
+    };
     run.forEach((slot, k) => {
+      // The file's own brackets win: a bracket the source started here closes the open group before it.
+      const marks = sourceMarks(slot);
+      if (marks.includes("start") && k > start) close(k - 1);
       filled = filled.add(slot.advance);
       const full = unit !== null && filled.gte(unit);
-      if (full || k === run.length - 1) {
-        run[start].tuplet.push("start");
-        slot.tuplet.push("stop");
-        start = k + 1;
-        filled = new Fraction(0);
-      }
+      if (marks.includes("stop") || (!marks.length && full && !openInSource(run, start, k)) || k === run.length - 1) close(k);
     });
     i = j + 1;
   }
+}
+
+/** A slot that may carry a tuplet bracket: not a grace note, not a two-note tremolo (its ratio is no tuplet). */
+function bracketable(slot: Slot): boolean {
+  const ev = slot.pieces[0].event;
+  return !slot.grace && !(ev.tremolo && (ev.tremolo.type === "start" || ev.tremolo.type === "stop"));
+}
+
+/** The source's `<tuplet>` marks on a slot written as one whole note. */
+function sourceMarks(slot: Slot): readonly ("start" | "stop")[] {
+  const p = slot.pieces[0];
+  return p.first && p.last ? (p.event.tuplets ?? []) : [];
+}
+
+/** True when the source opened a bracket in this group that it has not closed yet (then its stop decides). */
+function openInSource(run: readonly Slot[], start: number, k: number): boolean {
+  let open = false;
+  for (let x = start; x <= k; x++) {
+    const m = sourceMarks(run[x]);
+    if (m.includes("start")) open = true;
+    if (m.includes("stop")) open = false;
+  }
+  if (!open) return false;
+  // Only trust the open bracket when the source closes it later in this run.
+  return run.slice(k + 1).some((s) => sourceMarks(s).includes("stop"));
 }
 
 function sameRatio(a: Slot["pieces"][number]["tuplet"], b: { actual: number; normal: number }): boolean {

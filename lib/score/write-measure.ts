@@ -18,13 +18,20 @@ import { noteValues, toDivisions } from "./write-durations";
 import { noteXml } from "./write-notes";
 import type { Piece } from "./write-pieces";
 import { voiceStreams, type Slot, type VoiceStream } from "./write-voices";
-import { el } from "./write-xml";
+import { el, empty } from "./write-xml";
+import { barAccidentals, type AccidentalMark, type AccidentalState } from "./write-accidentals";
 
 /** Key, time and clefs in force while a part is written; updated bar by bar. */
 export interface PartState {
   key?: KeySignature;
   time?: TimeSignature;
   clefs: Map<number, Clef>;
+  /** Alterations the previous bar left different from its key (for courtesy accidentals). */
+  accidentals?: AccidentalState;
+  /** Octave line in force per staff (semitones, as `NoteEvent.octaveShift`). */
+  shifts?: Map<number, number>;
+  /** The staff each voice of the part mostly sits on (see write-voices). */
+  homeStaff?: ReadonlyMap<string, number>;
 }
 
 export interface MeasureContext {
@@ -50,7 +57,9 @@ export function measureXml(m: Measure, pieces: readonly Piece[], ctx: MeasureCon
   out.push(startAttributes(m, ctx));
   if (m.tempo && m.tempo > 0) out.push(tempoXml(m.tempo));
 
-  const streams = voiceStreams(pieces, ctx.staves);
+  const streams = voiceStreams(pieces, ctx.staves, ctx.state.homeStaff);
+  const accidentals = barAccidentals(m, pieces, ctx.state.accidentals ?? new Map());
+  ctx.state.accidentals = accidentals.state;
   const span = beamSpan(m.time);
   for (const s of streams) {
     assignBeams(s.slots, m.start, span);
@@ -76,7 +85,7 @@ export function measureXml(m: Measure, pieces: readonly Piece[], ctx: MeasureCon
       else if (t.lt(cursor)) out.push(`<backup>${el("duration", toDivisions(cursor.sub(t), ctx.divisions))}</backup>`);
       cursor = t;
       if ("pieces" in item) {
-        out.push(slotXml(item, stream, m, ctx));
+        out.push(slotXml(item, stream, m, ctx, accidentals.marks));
         cursor = cursor.add(item.advance);
       } else {
         out.push(changeXml(item.change, ctx));
@@ -87,6 +96,7 @@ export function measureXml(m: Measure, pieces: readonly Piece[], ctx: MeasureCon
       cursor = m.length;
     }
   });
+  if (ctx.last) out.push(closeShifts(ctx.state));
   out.push(bars.right);
   const implicit = m.implicit ? ' implicit="yes"' : "";
   return `<measure number="${escapeNumber(m.number, m.index)}"${implicit}>${out.join("")}</measure>`;
@@ -137,8 +147,11 @@ function changeXml(change: AttributeChange, ctx: MeasureContext): string {
   return xml === "<attributes></attributes>" ? "" : xml;
 }
 
-function slotXml(slot: Slot, stream: VoiceStream, m: Measure, ctx: MeasureContext): string {
-  const directions = slot.pieces.filter((p) => p.first).map((p) => eventDirectionsXml(p.event)).join("");
+function slotXml(slot: Slot, stream: VoiceStream, m: Measure, ctx: MeasureContext, accidentals: Map<Piece, AccidentalMark>): string {
+  const directions = shiftXml(slot, ctx.state) + slot.pieces.filter((p) => p.first).map((p) => eventDirectionsXml(p.event)).join("");
+  const midis = slot.pieces.map((p) => p.event.pitch?.midi ?? 0);
+  const low = Math.min(...midis);
+  const high = Math.max(...midis);
   const measureRest =
     slot.rest && stream.slots.length === 1 && slot.onset.equals(m.start) && slot.advance.equals(m.length);
   const notes = slot.pieces.map((p, i) =>
@@ -149,9 +162,41 @@ function slotXml(slot: Slot, stream: VoiceStream, m: Measure, ctx: MeasureContex
       beams: i === 0 ? slot.beams : [],
       tuplet: i === 0 ? slot.tuplet : [],
       measureRest,
+      accidental: accidentals.get(p),
+      chordEdge: slot.pieces.length < 2 ? undefined : midis[i] === low ? "bottom" : midis[i] === high ? "top" : undefined,
     }),
   );
   return directions + notes.join("");
+}
+
+/** `<octave-shift>` for one staff: `shift` semitones written below the sound (8va = 12) or a stop. */
+function octaveShiftXml(staff: number, shift: number, stop: boolean): string {
+  const size = Math.abs(shift) / 12 === 1 ? 8 : Math.abs(shift) / 12 === 2 ? 15 : 22;
+  const type = stop ? "stop" : shift > 0 ? "down" : "up";
+  const placement = shift > 0 ? "above" : "below";
+  return `<direction placement="${placement}"><direction-type>${empty("octave-shift", { type, size })}</direction-type>${el("staff", staff)}</direction>`;
+}
+
+/** Octave lines that end or begin at this slot, on the staff of its first note. */
+function shiftXml(slot: Slot, state: PartState): string {
+  const staff = slot.pieces[0].event.staff;
+  const want = slot.pieces[0].event.octaveShift ?? 0;
+  const shifts = (state.shifts ??= new Map());
+  const now = shifts.get(staff) ?? 0;
+  if (want === now) return "";
+  let out = "";
+  if (now !== 0) out += octaveShiftXml(staff, now, true);
+  if (want !== 0) out += octaveShiftXml(staff, want, false);
+  if (want === 0) shifts.delete(staff);
+  else shifts.set(staff, want);
+  return out;
+}
+
+/** Stops for every octave line still open at the end of the part. */
+function closeShifts(state: PartState): string {
+  const out = [...(state.shifts ?? new Map<number, number>()).entries()].map(([staff, shift]) => octaveShiftXml(staff, shift, true));
+  state.shifts?.clear();
+  return out.join("");
 }
 
 /** Rests (first voice of a staff) or a `<forward>` (other voices) from `from` to `to` in the bar. */

@@ -7,6 +7,7 @@ import type { NoteMark, Pitch } from "./types";
 import type { Piece } from "./write-pieces";
 import { toDivisions } from "./write-durations";
 import { el, empty } from "./write-xml";
+import type { AccidentalMark } from "./write-accidentals";
 
 export interface NoteContext {
   readonly divisions: number;
@@ -18,6 +19,10 @@ export interface NoteContext {
   readonly tuplet: readonly ("start" | "stop")[];
   /** A rest filling the whole bar (`<rest measure="yes"/>`). */
   readonly measureRest?: boolean;
+  /** The accidental sign this note shows (see write-accidentals). */
+  readonly accidental?: AccidentalMark;
+  /** Position in its chord: non-arpeggio brackets mark the chord's bottom and top notes. */
+  readonly chordEdge?: "bottom" | "top";
 }
 
 const STEP_SEMITONES = { C: 0, D: 2, E: 4, F: 5, G: 7, A: 9, B: 11 } as const;
@@ -43,7 +48,7 @@ export function noteXml(piece: Piece, ctx: NoteContext): string {
   const ev = piece.event;
   const grace = piece.duration.equals(0);
   const parts: string[] = [];
-  if (grace) parts.push(empty("grace"));
+  if (grace) parts.push(empty("grace", { slash: ev.graceSlash ? "yes" : undefined }));
   if (ctx.chord) parts.push(empty("chord"));
   if (ev.pitch) {
     const alter = ev.pitch.alter !== 0 ? el("alter", ev.pitch.alter) : "";
@@ -57,6 +62,7 @@ export function noteXml(piece: Piece, ctx: NoteContext): string {
   parts.push(el("voice", ctx.voice));
   if (piece.type) parts.push(el("type", piece.type));
   for (let i = 0; i < piece.dots; i++) parts.push(empty("dot"));
+  if (ctx.accidental) parts.push(el("accidental", ctx.accidental.value, { cautionary: ctx.accidental.cautionary ? "yes" : undefined }));
   if (piece.tuplet && !grace) {
     parts.push(
       `<time-modification>${el("actual-notes", piece.tuplet.actual)}${el("normal-notes", piece.tuplet.normal)}</time-modification>`,
@@ -75,7 +81,19 @@ function notationsXml(piece: Piece, ctx: NoteContext, marks: readonly NoteMark[]
   const inner: string[] = [];
   if (piece.tieStop) inner.push(empty("tied", { type: "stop" }));
   if (piece.tieStart) inner.push(empty("tied", { type: "start" }));
+  if (piece.letRing) inner.push(empty("tied", { type: "let-ring" }));
   for (const type of ctx.tuplet) inner.push(empty("tuplet", { type, bracket: "yes" }));
+  const ev = piece.event;
+  // A tremolo stays on a note that is not split; a split note loses it (its slices are tied values).
+  if (ev.tremolo && piece.first && piece.last) {
+    const attrs = { type: ev.tremolo.type };
+    inner.push(`<ornaments>${el("tremolo", ev.tremolo.marks, attrs)}</ornaments>`);
+  }
+  if (ev.arpeggio && piece.first) {
+    if (ev.arpeggio === "non-arpeggiate") {
+      if (ctx.chordEdge) inner.push(empty("non-arpeggiate", { type: ctx.chordEdge }));
+    } else inner.push(empty("arpeggiate", { direction: ev.arpeggio === "arpeggiate" ? undefined : ev.arpeggio }));
+  }
   const fingering = piece.first ? (piece.event.fingering ?? []) : [];
   if (fingering.length > 0) {
     const fingers = fingering.map((f) =>

@@ -17,6 +17,8 @@ export interface Piece {
   readonly tuplet: { readonly actual: number; readonly normal: number } | null;
   readonly tieStart: boolean;
   readonly tieStop: boolean;
+  /** The event's tie starts but its other half is not in the score: written as `<tied type="let-ring">`. */
+  readonly letRing?: boolean;
   /** First / last slice of its event (marks and fingering go on these). */
   readonly first: boolean;
   readonly last: boolean;
@@ -52,6 +54,7 @@ export function piecesByMeasure(score: Score, part: string): Piece[][] {
   const out: Piece[][] = measures.map(() => []);
   if (measures.length === 0) return out;
   const end = measureEnd(measures[measures.length - 1]);
+  const pairs = tiePartners(score.events, part);
   score.events.forEach((event, order) => {
     if (event.part !== part) return;
     if (event.grace || event.duration.lte(0)) {
@@ -79,9 +82,12 @@ export function piecesByMeasure(score: Score, part: string): Piece[][] {
         return item;
       });
     });
-    const origStop = event.tie === "stop" || event.tie === "continue";
-    const origStart = event.tie === "start" || event.tie === "continue";
+    // A tie whose other half is not in this score (a passage's edge) is dropped, never written as half a pair.
+    const origStop = (event.tie === "stop" || event.tie === "continue") && pairs.hasStart(event);
+    const tiedOn = event.tie === "start" || event.tie === "continue";
+    const origStart = tiedOn && pairs.hasStop(event);
     const isNote = event.pitch !== null;
+    const letRing = isNote && tiedOn && !origStart;
     values.forEach((v, i) => {
       out[v.bar].push({
         event,
@@ -92,6 +98,7 @@ export function piecesByMeasure(score: Score, part: string): Piece[][] {
         tuplet: v.value.tuplet,
         tieStop: isNote && (i > 0 || origStop),
         tieStart: isNote && (i < values.length - 1 || origStart),
+        ...(letRing && i === values.length - 1 ? { letRing: true } : {}),
         first: i === 0,
         last: i === values.length - 1,
         order,
@@ -99,6 +106,21 @@ export function piecesByMeasure(score: Score, part: string): Piece[][] {
     });
   });
   return out;
+}
+
+/** Which tied notes of a part have their other half in the score: same pitch, one ending where the other starts. */
+function tiePartners(events: readonly NoteEvent[], part: string): { hasStart(e: NoteEvent): boolean; hasStop(e: NoteEvent): boolean } {
+  const starts = new Set<string>();
+  const stops = new Set<string>();
+  for (const e of events) {
+    if (e.part !== part || !e.pitch) continue;
+    if (e.tie === "start" || e.tie === "continue") starts.add(`${e.pitch.midi}|${e.onset.add(e.duration).toFraction()}`);
+    if (e.tie === "stop" || e.tie === "continue") stops.add(`${e.pitch.midi}|${e.onset.toFraction()}`);
+  }
+  return {
+    hasStart: (e) => !e.pitch || starts.has(`${e.pitch.midi}|${e.onset.toFraction()}`),
+    hasStop: (e) => !e.pitch || stops.has(`${e.pitch.midi}|${e.onset.add(e.duration).toFraction()}`),
+  };
 }
 
 /** The bar of a grace note: its own bar when its onset lies inside or at the end of it. */

@@ -34,11 +34,13 @@ const voiceRank = (v: string): number => (/^\d+$/.test(v) ? Number(v) : 1000);
 
 /**
  * Voice streams for one bar, ordered by staff, then voice. Every staff of the part gets a stream,
- * an empty one (filled with a bar rest by the writer) when no voice sits on it.
+ * an empty one (filled with a bar rest by the writer) when no voice sits on it. A voice belongs to
+ * the staff it sits on most in the whole part (`homeStaffs`), so a voice that crosses to the other
+ * staff for a bar keeps its home staff and leaves no stray rest behind.
  * @example
  *   const streams = voiceStreams(pieces, 2); // [{ voice: "1", staff: 1, … }, { voice: "5", staff: 2, … }]
  */
-export function voiceStreams(pieces: readonly Piece[], staves: number): VoiceStream[] {
+export function voiceStreams(pieces: readonly Piece[], staves: number, homeStaffs?: ReadonlyMap<string, number>): VoiceStream[] {
   const byVoice = new Map<string, Piece[]>();
   for (const p of pieces) {
     const list = byVoice.get(p.event.voice) ?? [];
@@ -47,7 +49,7 @@ export function voiceStreams(pieces: readonly Piece[], staves: number): VoiceStr
   }
   const voices = [...byVoice.entries()].map(([voice, list]) => ({
     voice,
-    staff: homeStaff(list),
+    staff: homeStaffs?.get(voice) ?? homeStaff(list),
     slots: slotsOf(list),
   }));
   voices.sort((a, b) => a.staff - b.staff || voiceRank(a.voice) - voiceRank(b.voice) || a.voice.localeCompare(b.voice));
@@ -65,6 +67,27 @@ export function voiceStreams(pieces: readonly Piece[], staves: number): VoiceStr
     here.forEach((v, i) => streams.push({ ...v, primary: i === 0 }));
   }
   return streams;
+}
+
+/**
+ * The staff each voice sits on most, over the whole part.
+ * @example
+ *   partHomeStaffs(events).get("5"); // 2
+ */
+export function partHomeStaffs(events: readonly { readonly voice: string; readonly staff: number }[]): Map<string, number> {
+  const counts = new Map<string, Map<number, number>>();
+  for (const e of events) {
+    const c = counts.get(e.voice) ?? new Map<number, number>();
+    c.set(e.staff, (c.get(e.staff) ?? 0) + 1);
+    counts.set(e.voice, c);
+  }
+  const out = new Map<string, number>();
+  for (const [voice, c] of counts) {
+    let best = -1;
+    for (const [staff, n] of c) if (best < 0 || n > c.get(best)! || (n === c.get(best) && staff < best)) best = staff;
+    out.set(voice, best);
+  }
+  return out;
 }
 
 function homeStaff(list: readonly Piece[]): number {

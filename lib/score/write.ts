@@ -7,6 +7,7 @@ import type { PartInfo, Score } from "./types";
 import { divisionsFor } from "./write-durations";
 import { measureXml, type PartState } from "./write-measure";
 import { piecesByMeasure, type Piece } from "./write-pieces";
+import { partHomeStaffs } from "./write-voices";
 import { el } from "./write-xml";
 
 /**
@@ -71,7 +72,7 @@ function partXml(score: Score, part: PartInfo, id: string): string {
   const byBar = piecesByMeasure(score, part.id);
   const staves = Math.max(1, part.staves, ...byBar.flat().map((p) => p.event.staff));
   const divisions = partDivisions(score, byBar);
-  const state: PartState = { clefs: new Map() };
+  const state: PartState = { clefs: new Map(), homeStaff: partHomeStaffs(score.events.filter((e) => e.part === part.id)) };
   const measures = score.measures;
   if (measures.length === 0) return `<part id="${id}">\n<measure number="1"/>\n</part>`;
   const body = measures.map((m, i) =>

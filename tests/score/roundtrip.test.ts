@@ -6,7 +6,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { beforeAll, describe, expect, test } from "vitest";
-import { readScore } from "../../lib/score/read";
+import { readScore, scoreText } from "../../lib/score/read";
 import { mergeTies } from "../../lib/score/ties";
 import type { NoteEvent, Score } from "../../lib/score/types";
 import { writeMusicXML } from "../../lib/score/write";
@@ -40,6 +40,19 @@ function soundingKeys(events: readonly NoteEvent[]): string[] {
       [e.part, e.staff, e.voice, e.pitch!.midi, e.onset.toFraction(), e.duration.toFraction(), e.tie, JSON.stringify(e.fingering ?? [])].join(" "),
     )
     .sort();
+}
+
+/**
+ * The tie flags the writer keeps: a tie stop with no start before it has no MusicXML form and is dropped;
+ * a start with no stop is written as `<tied type="let-ring">` (MusicXML 4.0 <tied>: "let-ring" — the
+ * note sounds on, tied to nothing) and reads back as a start. Never half a pair.
+ */
+function withoutHalfTies(events: readonly NoteEvent[]): NoteEvent[] {
+  const ends = new Set(events.filter((e) => e.pitch && (e.tie === "start" || e.tie === "continue")).map((e) => `${e.part} ${e.pitch!.midi} ${e.onset.add(e.duration).toFraction()}`));
+  return events.map((e) => {
+    if (!e.pitch || (e.tie !== "stop" && e.tie !== "continue") || ends.has(`${e.part} ${e.pitch.midi} ${e.onset.toFraction()}`)) return e;
+    return { ...e, tie: e.tie === "continue" ? "start" : "none" };
+  });
 }
 
 const graceKeys = (events: readonly NoteEvent[]): string[] =>
@@ -87,7 +100,7 @@ describe("writeMusicXML round trip over the reference corpus", () => {
       // Our reader on the written file: same sounding notes (ties merged, since splitting at
       // barlines may change the tie structure) and the same grace notes.
       const back = readScore(xml).score;
-      expect(soundingKeys(back.events)).toEqual(soundingKeys(original.events));
+      expect(soundingKeys(back.events)).toEqual(soundingKeys(withoutHalfTies(original.events)));
       expect(graceKeys(back.events)).toEqual(graceKeys(original.events));
       expect(back.measures.length).toBe(original.measures.length);
 
@@ -107,6 +120,10 @@ describe("writeMusicXML round trip over the reference corpus", () => {
         expect(triples(written.filter((n) => !inGraceBar(n.onset)))).toEqual(
           modelTriples(original, model.filter((e) => !inGraceBar(e.onset.valueOf()))),
         );
+      } else if (original.events.some((e) => e.arpeggio && e.arpeggio !== "non-arpeggiate")) {
+        // verovio rolls arpeggiated chords in its timemap (a performance map); the written file must give
+        // verovio the same rolled onsets as the original does (same signs on the same chords).
+        expect(triples(written)).toEqual(triples(await verovioNotes(scoreText(bytes), { mergeTies: true })));
       } else if (VEROVIO_LEFT_OUT[file]) {
         expect(triples(await verovioNotes(xml))).toEqual(modelTriples(back, back.events));
       } else {
