@@ -124,3 +124,18 @@ export function asSignature(k: PassageKey): KeySignature {
 export function keyLabel(k: PassageKey, form: MinorForm = "harmonic"): string {
   return scaleNameOf(k, form).replace(/^([A-G])(#+|b+)?/, (_m, l: string, acc?: string) => l + (acc ?? "").replace(/#/g, "♯").replace(/b/g, "♭"));
 }
+
+/**
+ * The minor form to write for a passage: the chosen one, unless its scale needs a double sharp or
+ * flat the passage never writes (C𝄪 of D♯ harmonic minor), when the natural minor is used instead
+ * (DRILL-RUBRIC "Spelled as a musician spells": no double accidentals the passage does not have).
+ *
+ * @example
+ * writableForm({ tonic: "D#", mode: "minor", fifths: 6 }, "harmonic", passage); // "natural" when the passage has no C𝄪
+ */
+export function writableForm(k: PassageKey, form: MinorForm, passage: Pick<Passage, "events">): MinorForm {
+  if (k.mode === "major" || form === "natural") return form;
+  const doubles = (names: readonly string[]) => names.some((n) => /##|bb|x/.test(n));
+  if (!doubles(keyScaleNotes(k, form))) return form;
+  return passage.events.some((e) => e.pitch && Math.abs(e.pitch.alter) >= 2) ? form : "natural";
+}

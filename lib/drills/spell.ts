@@ -57,12 +57,15 @@ export function keyScaleName(key: KeySignature): string {
   return `${keyTonic(key)} ${key.mode === "minor" ? "minor" : "major"}`;
 }
 
-/** Pitch classes treated as "in the key": the scale, plus the raised 6th and 7th in minor. */
+/**
+ * Pitch classes treated as "in the key": the scale, plus the raised 6th and 7th in minor unless
+ * they need a double sharp (C𝄪 in D♯ minor: a plain D is spelled D).
+ */
 function keyPitchClasses(key: KeySignature): string[] {
   const tonic = keyTonic(key);
   if (key.mode !== "minor") return Scale.get(`${tonic} major`).notes;
   const natural = Scale.get(`${tonic} minor`).notes;
-  const melodic = Scale.get(`${tonic} melodic minor`).notes;
+  const melodic = Scale.get(`${tonic} melodic minor`).notes.filter((n) => !/##|bb/.test(n));
   return [...new Set([...natural, ...melodic])];
 }
 

@@ -11,7 +11,7 @@ import type { Hand, Passage } from "../../score/types";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { buildDrill, passageHands, restSlot, type Slot } from "../build";
 import { beatLength, groupSonorities, placeInBar } from "../groups";
-import { asSignature, keyLabel, MINOR_FORMS, passageKey } from "../key-mode";
+import { asSignature, keyLabel, MINOR_FORMS, passageKey, writableForm } from "../key-mode";
 import { barCap, firstWithin } from "../length";
 import { keyTonic, pitchFromName } from "../spell";
 
@@ -92,8 +92,9 @@ export function twoOctaveScale(key: Passage["key"], octave: number, minorForm: S
 }
 
 function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options: ScaleRhythmOptions, octaves: number): Slot[] {
-  const key = asSignature(passageKey(passage));
-  const names = twoOctaveScale(key, hand === "right" ? 4 : 2, options.minorForm, octaves);
+  const pk = passageKey(passage);
+  const key = asSignature(pk);
+  const names = twoOctaveScale(key, hand === "right" ? 4 : 2, writableForm(pk, options.minorForm, passage), octaves);
   const fingers = scaleFingering(keyTonic(key), key.mode, hand);
   // The two-octave fingering's first octave serves a one-octave scale, with the top note's finger.
   const top = 7 * octaves;
@@ -126,7 +127,8 @@ function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options:
 export function generateScaleRhythm(passage: Passage, options: ScaleRhythmOptions, ctx: DrillContext): FamilyResult {
   const hands = passageHands(passage).filter((h) => passage.sonorities[h].length > 0);
   if (hands.length === 0) return { drills: [], skipped: "The passage has no notes to take a rhythm from." };
-  const keyName = keyLabel(passageKey(passage), options.minorForm);
+  const pk = passageKey(passage);
+  const keyName = keyLabel(pk, writableForm(pk, options.minorForm, passage));
   const cap = barCap(passage, ctx);
   const drills: Drill[] = [];
   const sets: (Hand | "both")[] = hands.length === 2 ? ["right", "left", "both"] : hands;

@@ -9,7 +9,7 @@ import { z } from "zod";
 import type { Hand, KeySignature, Passage, Pitch, Sonority } from "../../score/types";
 import { buildDrill, defaultTempo, passageHands, type Slot, type SlotNote } from "../build";
 import { measureSpan, pitchSpan } from "../span";
-import { asSignature, passageKey } from "../key-mode";
+import { asSignature, passageKey, writableForm, type MinorForm } from "../key-mode";
 import { countOf } from "../length";
 import { spellMidi } from "../spell";
 import type { Drill, DrillContext, DrillFamily, DrillWarning, FamilyResult, HandProfile } from "../types";
@@ -34,9 +34,9 @@ export type SequenceOptions = z.output<typeof sequenceOptions>;
  * k × semitones spelled the key's way (chromatic: flats in flat keys, sharps in sharp keys).
  * @example movePitch(pitchFromName("E4"), 1, sequenceOptions.parse({}), { fifths: 0, mode: "major" }) // F4
  */
-export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySignature): Pitch {
+export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
   if (k === 0) return p;
-  if (o.motion === "diatonic") return diatonicShift(p, k * o.steps, key);
+  if (o.motion === "diatonic") return diatonicShift(p, k * o.steps, key, form);
   const by = k * o.semitones;
   return spellMidi(p.midi + by, key, by > 0 ? "up" : "down");
 }
@@ -46,8 +46,8 @@ export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySigna
  * hand): scale degrees reflected (diatonic) or semitones reflected (chromatic).
  * @example mirrorPitch(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3"), sequenceOptions.parse({}), { fifths: 0, mode: "major" }) // A2
  */
-export function mirrorPitch(axis: Pitch, p: Pitch, target: Pitch, o: SequenceOptions, key: KeySignature): Pitch {
-  if (o.motion === "diatonic") return diatonicShift(target, -degreeDistance(axis, p, key), key);
+export function mirrorPitch(axis: Pitch, p: Pitch, target: Pitch, o: SequenceOptions, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  if (o.motion === "diatonic") return diatonicShift(target, -degreeDistance(axis, p, key), key, form);
   const by = p.midi - axis.midi;
   return spellMidi(target.midi - by, key, by > 0 ? "down" : "up");
 }
@@ -76,7 +76,9 @@ function over(pitches: readonly Pitch[], profile: HandProfile): boolean {
 function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: DrillContext): Drill[] {
   const { sons, durations } = figureOf(passage.sonorities[hand], o.figureNotes);
   if (sons.length < 2) return [];
-  const key = asSignature(passageKey(passage));
+  const pk = passageKey(passage);
+  const key = asSignature(pk);
+  const form = writableForm(pk, "harmonic", passage);
   const other: Hand = hand === "right" ? "left" : "right";
   const axis = sons[0].notes[0].pitch!;
   const target: Pitch = { ...axis, octave: axis.octave + (hand === "right" ? -1 : 1), midi: axis.midi + (hand === "right" ? -12 : 12) };
@@ -88,8 +90,8 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     let mirror: Pitch[][] = [];
     let fits = true;
     try {
-      main = sons.map((s) => s.notes.map((n) => movePitch(n.pitch!, k, o, key)));
-      mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key)));
+      main = sons.map((s) => s.notes.map((n) => movePitch(n.pitch!, k, o, key, form)));
+      mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key, form)));
       fits = onPiano([...main.flat(), ...(withMirror ? mirror.flat() : [])]);
     } catch {
       fits = false; // far off the keyboard: tonal cannot even name the note

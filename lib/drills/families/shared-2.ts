@@ -56,22 +56,22 @@ function scalePosition(p: Pitch, scale: readonly string[]): { degree: number; oc
  * @example diatonicShift(pitchFromName("E4"), 1, { fifths: 0, mode: "major" }) // F4
  * @example diatonicShift(pitchFromName("G#4"), 1, { fifths: 0, mode: "minor" }) // A4 (G♯ is A minor's leading tone)
  */
-export function diatonicShift(p: Pitch, steps: number, key: KeySignature): Pitch {
-  const memo = `${p.step}${p.alter}${p.octave}|${steps}|${key.fifths}${key.mode}`;
+export function diatonicShift(p: Pitch, steps: number, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  const memo = `${p.step}${p.alter}${p.octave}|${steps}|${key.fifths}${key.mode}|${form}`;
   let found = SHIFTS.get(memo);
   if (!found) {
-    found = shiftBySteps(p, steps, key);
+    found = shiftBySteps(p, steps, key, form);
     if (SHIFTS.size > 8192) SHIFTS.clear();
     SHIFTS.set(memo, found);
   }
   return { ...found };
 }
 
-function shiftBySteps(p: Pitch, steps: number, key: KeySignature): Pitch {
-  const scale = keyScale(key);
+function shiftBySteps(p: Pitch, steps: number, key: KeySignature, form: MinorForm): Pitch {
+  const scale = keyScale(key, form);
   const pos = scalePosition(p, scale);
   const tonic = `${scale[0]}${pos.octave}`;
-  const name = scaleName(key, "harmonic");
+  const name = scaleName(key, form);
   const degreeOf = Scale.degrees(`${tonic} ${name.slice(name.indexOf(" ") + 1)}`);
   const k = pos.degree + steps;
   const target = namePitch(degreeOf(k >= 0 ? k + 1 : k));
@@ -110,8 +110,8 @@ export function mirrorChromatic(axis: Pitch, p: Pitch, target: Pitch): Pitch {
  * k degrees below `target`.
  * @example mirrorDiatonic(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3"), { fifths: 0, mode: "major" }) // A2
  */
-export function mirrorDiatonic(axis: Pitch, p: Pitch, target: Pitch, key: KeySignature): Pitch {
-  return diatonicShift(target, -degreeDistance(axis, p, key), key);
+export function mirrorDiatonic(axis: Pitch, p: Pitch, target: Pitch, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  return diatonicShift(target, -degreeDistance(axis, p, key), key, form);
 }
 
 /**

@@ -8,7 +8,7 @@ import { Note, Scale } from "tonal";
 import { z } from "zod";
 import type { Hand, Passage } from "../../score/types";
 import { buildDrill, defaultTempo, passageHands, type Slot } from "../build";
-import { asSignature, MINOR_FORMS, passageKey, scaleNameOf } from "../key-mode";
+import { asSignature, MINOR_FORMS, passageKey, scaleNameOf, writableForm } from "../key-mode";
 import { barCap, firstWithin } from "../length";
 import { keyTonic, pitchFromName } from "../spell";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
@@ -92,11 +92,12 @@ export function onKeyboard(names: readonly string[]): string[] | null {
 
 function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: DrillContext): Drill[] {
   const pk = passageKey(passage);
-  const name = scaleNameOf(pk, o.minorForm);
+  const form = writableForm(pk, o.minorForm, passage);
+  const name = scaleNameOf(pk, form);
   const oct = tonicOctave(passage, hand);
   const scale = `${pk.tonic}${oct} ${name.slice(name.indexOf(" ") + 1)}`;
   // Melodic minor comes down as natural minor (common practice).
-  const downName = o.minorForm === "melodic" && pk.mode === "minor" ? scaleNameOf(pk, "natural") : name;
+  const downName = form === "melodic" && pk.mode === "minor" ? scaleNameOf(pk, "natural") : name;
   const down = `${pk.tonic}${oct} ${downName.slice(downName.indexOf(" ") + 1)}`;
   const value = VALUES[o.value];
   const cap = barCap(passage, ctx);
