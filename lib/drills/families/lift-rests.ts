@@ -6,7 +6,8 @@
  */
 import Fraction from "fraction.js";
 import { z } from "zod";
-import type { Passage, Sonority } from "../../score/types";
+import type { Passage, TimeSignature } from "../../score/types";
+import { isCompound } from "../meter";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { barLength, buildDrill, passageHands, passageSlots, restSlot, type Slot } from "../build";
 import { beatLength, GROUP_BY, groupLength, groupSonorities, placeInBar } from "../groups";
@@ -21,6 +22,21 @@ export const liftRestsOptions = z.object({
 export type LiftRestsOptions = z.output<typeof liftRestsOptions>;
 
 /**
+ * The metric unit a group keeps its place in: the beat for a group within a beat, the half bar
+ * (in four-beat simple time) or the bar for a longer one.
+ *
+ * @example
+ * alignUnit(new Fraction(4), { beats: 4, beatType: 4 }).toFraction(); // "4"
+ */
+export function alignUnit(length: Fraction, time: TimeSignature): Fraction {
+  const beat = beatLength(time);
+  const bar = barLength(time);
+  if (length.compare(beat) <= 0) return beat;
+  if (!isCompound(time) && time.beats % 4 === 0 && length.compare(bar.div(2)) <= 0) return bar.div(2);
+  return bar;
+}
+
+/**
  * One drill per hand: each group as written, followed by a rest of the chosen length.
  *
  * @example
@@ -33,9 +49,8 @@ export function generateLiftRests(passage: Passage, options: LiftRestsOptions, c
   for (const hand of hands) {
     const groups = groupSonorities(passage, hand, options.groupBy, ctx.profile);
     if (groups.length < 2) continue;
-    const beat = beatLength(passage.time);
-    const inBeat = (g: readonly Sonority[]) => placeInBar(passage, g[0].onset).offset.mod(beat);
-    const lead = placeInBar(passage, groups[0][0].onset).offset.mod(barLength(passage.time));
+    const bar = barLength(passage.time);
+    const lead = placeInBar(passage, groups[0][0].onset).offset.mod(bar);
     let t = lead;
     const slots: Slot[] = groups.flatMap((g, i) => {
       const from = g[0].onset;
@@ -44,8 +59,11 @@ export function generateLiftRests(passage: Passage, options: LiftRestsOptions, c
       t = t.add(length);
       const next = groups[i + 1];
       if (!next) return out;
-      // The lift, lengthened so that the next group starts at its own place in the beat.
-      const gap = inBeat(next).sub(t.add(lift)).mod(beat).add(beat).mod(beat);
+      // The lift, lengthened so that the next group starts at its own place in the beat (in the
+      // half bar or bar for a longer group), so its notes are written as in the score.
+      const unit = alignUnit(groupLength(next), passage.time);
+      const place = placeInBar(passage, next[0].onset).offset.mod(unit);
+      const gap = place.sub(t.add(lift)).mod(unit).add(unit).mod(unit);
       const rest = lift.add(gap);
       t = t.add(rest);
       return [...out, restSlot(rest)];
