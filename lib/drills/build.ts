@@ -7,6 +7,8 @@ import Fraction from "fraction.js";
 import type { Clef, Hand, Measure, NoteEvent, Passage, Score, Sonority, TimeSignature } from "../score/types";
 import type { Drill, DrillContext, DrillWarning, HandProfile, SpanReport } from "./types";
 import { barLength, laySegments, type LaidEvent, type Segment, type Slot, type SlotNote } from "./layout";
+import { countOf } from "./length";
+import { beatUnit, inBeats } from "./meter";
 import { mulberry32 } from "./rng";
 import { estimatedFingers, measureSpan, newFingeringMemo, PROFILE, type FingeringMemo } from "./span";
 
@@ -38,12 +40,15 @@ export interface DrillSpec {
  * @example
  * const ctx = makeContext({ seed: 7 });
  */
-export function makeContext(o: { profile?: HandProfile; seed?: number; safety?: boolean; fingeringMemo?: FingeringMemo } = {}): DrillContext {
+export function makeContext(
+  o: { profile?: HandProfile; seed?: number; safety?: boolean; fingeringMemo?: FingeringMemo; maxBars?: number } = {},
+): DrillContext {
   return {
     profile: o.profile ?? PROFILE,
     rng: mulberry32(o.seed ?? 1),
     safety: o.safety ?? true,
     fingeringMemo: o.fingeringMemo ?? newFingeringMemo(),
+    ...(o.maxBars !== undefined ? { maxBars: o.maxBars } : {}),
   };
 }
 
@@ -57,6 +62,18 @@ export function makeContext(o: { profile?: HandProfile; seed?: number; safety?: 
 export function defaultTempo(passage: Passage): { start: number; target: number } {
   const target = passage.measures.find((m) => m.tempo !== undefined)?.tempo ?? 80;
   return { start: Math.max(20, Math.round(target * 0.6)), target };
+}
+
+/**
+ * Quarter-note tempi with the same marks in the meter's beat added when the beat is not a quarter.
+ *
+ * @example
+ * withBeat({ start: 54, target: 90 }, { beats: 6, beatType: 8 }).beat; // { symbol: "♩.", start: 36, target: 60 }
+ */
+export function withBeat(t: { start: number; target: number }, time: TimeSignature): Drill["tempo"] {
+  const unit = beatUnit(time);
+  if (unit.type === "quarter" && unit.dots === 0) return { start: t.start, target: t.target };
+  return { start: t.start, target: t.target, beat: { symbol: unit.symbol, start: inBeats(t.start, time), target: inBeats(t.target, time) } };
 }
 
 /**
@@ -249,7 +266,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
   const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));
   if (outOfRange.length) {
-    warnings.push({ code: "range", message: `${outOfRange.length} note(s) fall outside the keyboard (A0–C8).` });
+    warnings.push({ code: "range", message: `${countOf(outOfRange.length, "note")} ${outOfRange.length === 1 ? "falls" : "fall"} outside the keyboard (A0–C8).` });
   }
   const maxSpan: { right?: SpanReport; left?: SpanReport } = {};
   for (const h of hands) {
@@ -281,7 +298,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
     studentNote: spec.studentNote,
     hands: hands.length === 2 ? "both" : hands[0],
     score,
-    tempo: spec.tempo ?? defaultTempo(passage),
+    tempo: withBeat(spec.tempo ?? defaultTempo(passage), time),
     maxSpan,
     warnings,
     fingeringSource,

@@ -5,6 +5,7 @@
 import type { Passage } from "../score/types";
 import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
+import { barCap, capDrill } from "./length";
 import { newFingeringMemo } from "./span";
 import { withLightEndings } from "./groups-option";
 import { blocking } from "./families/blocking";
@@ -31,6 +32,7 @@ export { estimateFingering } from "./fingering";
 export { DEFAULT_PROFILE, keyDistanceMm, profileFromInches, spanOf } from "./hand";
 export { difficultyMap, hardestBars } from "./difficulty";
 export { applyLightEndings, lightEndingsOption } from "./groups-option";
+export { barCap, capDrill, countOf, shownLabel } from "./length";
 
 /**
  * Every drill family by id, in the order a teacher sees them.
@@ -56,6 +58,8 @@ export interface GenerateOptions {
   readonly seed?: number;
   /** Keep generators that move notes inside the profile (default true). */
   readonly safety?: boolean;
+  /** Most bars a drill may have (default the larger of 8 and twice the passage). */
+  readonly maxBars?: number;
   /** End each group lightly: a long note after shorter ones is cut short and lifted (default false). */
   readonly lightEndings?: boolean;
 }
@@ -101,12 +105,13 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
       continue;
     }
     const options = family.options.parse(opts.options?.[id] ?? {});
-    const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo });
+    const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo, maxBars: opts.maxBars });
     let result: ReturnType<DrillFamily["generate"]>;
     let written: Drill[];
     try {
       result = family.generate(passage, options, ctx);
-      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false });
+      const cap = barCap(passage, ctx);
+      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }).map((d) => capDrill(d, cap));
     } catch (error) {
       // A family that cannot write something in this passage is skipped; the others still generate.
       skipped.push({ family: id, reason: `This drill could not be written for these bars: ${reasonOf(error)}` });

@@ -42,6 +42,20 @@ describe("spell", () => {
     expect(pitchName(chromaticStep(pitchFromName("C4"), -1))).toBe("B3");
   });
 
+  test("with a key, chromatic steps keep the key's side: G, A♭, A, B♭ in E♭ major, never G♯ or A♯ (common practice)", () => {
+    const eb = major(-3);
+    const walk = ["G4"];
+    for (let i = 0; i < 3; i++) walk.push(pitchName(chromaticStep(pitchFromName(walk[walk.length - 1]), 1, eb)));
+    expect(walk).toEqual(["G4", "Ab4", "A4", "Bb4"]);
+    // Every step of a flat key's walk is spelled with flats or naturals, both ways; a sharp key's with sharps.
+    for (let m = 40; m < 90; m++) {
+      expect(spellMidi(m, major(-2), "up").alter).toBeLessThanOrEqual(0);
+      expect(spellMidi(m, major(3), "down").alter).toBeGreaterThanOrEqual(0);
+      // Same sounding key as tonal's Note.midi (reference: tonal).
+      expect(Note.midi(pitchName(spellMidi(m, major(-2), "up")))).toBe(m);
+    }
+  });
+
   test("transposePitch agrees with tonal Note.transpose and keeps MIDI consistent", () => {
     for (const [from, ivl] of [["C4", "3M"], ["F#3", "-2m"], ["Bb4", "8P"], ["E5", "5P"]] as const) {
       const p = transposePitch(pitchFromName(from), ivl);

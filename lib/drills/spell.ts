@@ -1,6 +1,8 @@
 /**
  * Pitch spelling for drills, on top of tonal: MIDI numbers spelled in a key, transposition by
- * interval, and chromatic steps spelled with sharps going up and flats going down.
+ * interval, and chromatic steps spelled the key's way — the key's own notes first, then flats in
+ * flat keys and sharps in sharp keys (a key has one spelling direction); in C major and A minor,
+ * sharps going up and flats going down (common practice).
  */
 import { Note, Scale } from "tonal";
 import type { KeySignature, Pitch } from "../score/types";
@@ -55,12 +57,15 @@ export function keyScaleName(key: KeySignature): string {
   return `${keyTonic(key)} ${key.mode === "minor" ? "minor" : "major"}`;
 }
 
-/** Pitch classes treated as "in the key": the scale, plus the raised 6th and 7th in minor. */
+/**
+ * Pitch classes treated as "in the key": the scale, plus the raised 6th and 7th in minor unless
+ * they need a double sharp (C𝄪 in D♯ minor: a plain D is spelled D).
+ */
 function keyPitchClasses(key: KeySignature): string[] {
   const tonic = keyTonic(key);
   if (key.mode !== "minor") return Scale.get(`${tonic} major`).notes;
   const natural = Scale.get(`${tonic} minor`).notes;
-  const melodic = Scale.get(`${tonic} melodic minor`).notes;
+  const melodic = Scale.get(`${tonic} melodic minor`).notes.filter((n) => !/##|bb/.test(n));
   return [...new Set([...natural, ...melodic])];
 }
 
@@ -75,14 +80,15 @@ function withPitchClass(pc: string, midi: number): Pitch | null {
 }
 
 /**
- * Spell a MIDI number: the key's own spelling when the pitch class belongs to the key, otherwise
- * sharps going up and flats going down (common practice); with no direction, the key's side
- * (sharps in sharp keys and C, flats in flat keys).
+ * Spell a MIDI number: the key's own spelling when the pitch class belongs to the key; otherwise
+ * the key's side — flats in flat keys, sharps in sharp keys — and, in a key with no sharps or
+ * flats, sharps going up and flats going down (common practice; sharps with no direction).
  *
  * @example
  * spellMidi(66, { fifths: -1, mode: "major" }); // Gb4 (F major has no F#)
  * spellMidi(66, { fifths: 2, mode: "major" }); // F#4 (in D major)
  * spellMidi(61, { fifths: 0, mode: "major" }, "down"); // Db4
+ * spellMidi(68, { fifths: -3, mode: "major" }, "up"); // Ab4 (E♭ major: G, A♭, A, B♭ going up)
  */
 export function spellMidi(
   midi: number,
@@ -95,19 +101,23 @@ export function spellMidi(
       if (p) return p;
     }
   }
-  const sharps = direction === "up" || (direction === "none" && key.fifths >= 0);
+  const sharps = key.fifths > 0 || (key.fifths === 0 && direction !== "down");
   return pitchFromName(sharps ? Note.fromMidiSharps(midi) : Note.fromMidi(midi));
 }
 
 /**
- * One chromatic step up (spelled with a sharp or a natural) or down (a flat or a natural).
+ * One chromatic step up or down. With a key, spelled the key's way (`spellMidi`: its own notes,
+ * then flats in flat keys and sharps in sharp keys); without one, a sharp or natural going up and
+ * a flat or natural going down.
  *
  * @example
  * chromaticStep(pitchFromName("C4"), 1); // C#4
  * chromaticStep(pitchFromName("D4"), -1); // Db4
+ * chromaticStep(pitchFromName("G4"), 1, { fifths: -3, mode: "major" }); // Ab4
  */
-export function chromaticStep(p: Pitch, dir: 1 | -1): Pitch {
+export function chromaticStep(p: Pitch, dir: 1 | -1, key?: KeySignature): Pitch {
   const midi = p.midi + dir;
+  if (key) return spellMidi(midi, key, dir > 0 ? "up" : "down");
   return pitchFromName(dir > 0 ? Note.fromMidiSharps(midi) : Note.fromMidi(midi));
 }
 

@@ -65,8 +65,15 @@ export interface Drill {
   readonly hands: Hand | "both";
   /** A small, complete score, ready for `writeMusicXML`. */
   readonly score: Score;
-  /** Quarter-note metronome marks. */
-  readonly tempo: { readonly start: number; readonly target: number };
+  /**
+   * Quarter-note metronome marks; `beat` gives the same marks in the meter's beat when that is not
+   * a quarter (a dotted quarter in 6/8: quarter 90 is "♩. = 60").
+   */
+  readonly tempo: {
+    readonly start: number;
+    readonly target: number;
+    readonly beat?: { readonly symbol: string; readonly start: number; readonly target: number };
+  };
   readonly maxSpan: { readonly right?: SpanReport; readonly left?: SpanReport };
   readonly warnings: readonly DrillWarning[];
   /**
@@ -86,6 +93,8 @@ export interface DrillContext {
   readonly safety: boolean;
   /** Fingering estimates shared by the drills of one run (made per context when absent). */
   readonly fingeringMemo?: FingeringMemo;
+  /** Most bars a drill may have; default the larger of 8 and twice the passage (see `length.ts`). */
+  readonly maxBars?: number;
 }
 
 /** What a family returns: its drills, or why it does not apply to this passage. */

@@ -9,6 +9,7 @@ import { keyTonic, pitchFromName, pitchName, spellMidi } from "../../lib/drills/
 import { makePassage } from "../../lib/drills/test-passages";
 import { walkSteps } from "../../lib/drills/families/pivot-walk";
 import type { Drill } from "../../lib/drills/types";
+import { passageKey, writableForm } from "../../lib/drills/key-mode";
 
 const TIMES = [
   { beats: 4, beatType: 4 },
@@ -89,17 +90,25 @@ describe("drill properties over random passages", () => {
     );
   });
 
-  test("scale-rhythm plays tonal's Scale.get(...).notes of the key (reference: tonal)", () => {
+  test("scale-rhythm plays tonal's Scale.get(...).notes of the passage's key and mode (reference: tonal)", () => {
     fc.assert(
       fc.property(passages, (passage) => {
         const { drills } = generateDrills(passage, { families: ["scale-rhythm"] });
-        const tonic = keyTonic(passage.key);
-        const pcs = Scale.get(`${tonic} major`).notes;
+        // The scale is the passage's own key and mode (a passage centred on the relative minor gets the
+        // minor scale, harmonic by default, natural where harmonic would need a double sharp).
+        const k = passageKey(passage);
+        const form = writableForm(k, "harmonic", passage);
+        const pcs = Scale.get(`${k.tonic} ${k.mode === "major" ? "major" : form === "natural" ? "minor" : `${form} minor`}`).notes;
         for (const d of drills) {
           const staff1 = d.score.events.filter((e) => e.pitch && e.staff === 1 && e.tie !== "stop" && e.tie !== "continue");
           const names = staff1.map((e) => Note.pitchClass(pitchName(e.pitch!)));
-          expect(names.slice(0, 7)).toEqual(pcs);
-          expect(names.slice(7, 14)).toEqual(pcs);
+          // Up to the top note the scale climbs through the key's notes in order (one or two octaves).
+          const midis = staff1.map((e) => e.pitch!.midi);
+          const top = midis.indexOf(Math.max(...midis));
+          expect(top).toBeGreaterThanOrEqual(7);
+          const up = names.slice(0, top);
+          expect(up).toEqual(up.map((_, i) => pcs[i % 7]));
+          expect(names.every((n) => pcs.includes(n))).toBe(true);
         }
       }),
       { numRuns: 25 },

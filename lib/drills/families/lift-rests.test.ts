@@ -27,4 +27,11 @@ describe("lift-rests", () => {
     // 4 quarters + 4 eighth rests = 6 quarters, completed to 8 (two bars).
     expect(drills[0].score.measures).toHaveLength(2);
   });
+
+  test("each group keeps its place in the beat and the opening rest is kept (no value invented by the shift)", () => {
+    const p = makePassage({ right: "r/8 C4/8 D4/8 E4/8 F4/4 G4/4" });
+    const { drills } = liftRests.generate(p, liftRestsOptions.parse({}), makeContext());
+    // Hand-computed: the eighth lift is lengthened to a quarter so that each next group starts on its beat.
+    expect(drillText(drills[0].score.events)).toEqual(["r:1/2", "C4:1/2", "r:1", "D4:1/2", "E4:1/2", "r:1", "F4:1", "r:1", "G4:1", "r:1"]);
+  });
 });

@@ -1,12 +1,16 @@
 /**
  * Lift rests: a rest after each group, so the hand lifts, relaxes and lands on the next group.
+ * Every group keeps its place in the beat (the rest is the chosen length or a little more), so
+ * the rhythm reads as in the score and no value is invented by the shift; the passage's opening
+ * rest is kept.
  */
 import Fraction from "fraction.js";
 import { z } from "zod";
-import type { Passage } from "../../score/types";
+import type { Passage, TimeSignature } from "../../score/types";
+import { isCompound } from "../meter";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
-import { buildDrill, leadOf, passageHands, passageSlots, restSlot, type Slot } from "../build";
-import { GROUP_BY, groupLength, groupSonorities } from "../groups";
+import { barLength, buildDrill, passageHands, passageSlots, restSlot, type Slot } from "../build";
+import { beatLength, GROUP_BY, groupLength, groupSonorities, placeInBar } from "../groups";
 
 /** Rest lengths in quarter notes. */
 export const LIFT_LENGTHS = { "16th": new Fraction(1, 4), eighth: new Fraction(1, 2), quarter: new Fraction(1), half: new Fraction(2) } as const;
@@ -16,6 +20,21 @@ export const liftRestsOptions = z.object({
   rest: z.enum(["16th", "eighth", "quarter", "half"]).default("eighth"),
 });
 export type LiftRestsOptions = z.output<typeof liftRestsOptions>;
+
+/**
+ * The metric unit a group keeps its place in: the beat for a group within a beat, the half bar
+ * (in four-beat simple time) or the bar for a longer one.
+ *
+ * @example
+ * alignUnit(new Fraction(4), { beats: 4, beatType: 4 }).toFraction(); // "4"
+ */
+export function alignUnit(length: Fraction, time: TimeSignature): Fraction {
+  const beat = beatLength(time);
+  const bar = barLength(time);
+  if (length.compare(beat) <= 0) return beat;
+  if (!isCompound(time) && time.beats % 4 === 0 && length.compare(bar.div(2)) <= 0) return bar.div(2);
+  return bar;
+}
 
 /**
  * One drill per hand: each group as written, followed by a rest of the chosen length.
@@ -30,9 +49,24 @@ export function generateLiftRests(passage: Passage, options: LiftRestsOptions, c
   for (const hand of hands) {
     const groups = groupSonorities(passage, hand, options.groupBy, ctx.profile);
     if (groups.length < 2) continue;
-    const slots: Slot[] = groups.flatMap((g) => {
+    const bar = barLength(passage.time);
+    const lead = placeInBar(passage, groups[0][0].onset).offset.mod(bar);
+    let t = lead;
+    const slots: Slot[] = groups.flatMap((g, i) => {
       const from = g[0].onset;
-      return [...passageSlots(passage, hand, undefined, g, { from, to: from.add(groupLength(g)) }), restSlot(lift)];
+      const length = groupLength(g);
+      const out = passageSlots(passage, hand, undefined, g, { from, to: from.add(length) });
+      t = t.add(length);
+      const next = groups[i + 1];
+      if (!next) return out;
+      // The lift, lengthened so that the next group starts at its own place in the beat (in the
+      // half bar or bar for a longer group), so its notes are written as in the score.
+      const unit = alignUnit(groupLength(next), passage.time);
+      const place = placeInBar(passage, next[0].onset).offset.mod(unit);
+      const gap = place.sub(t.add(lift)).mod(unit).add(unit).mod(unit);
+      const rest = lift.add(gap);
+      t = t.add(rest);
+      return [...out, restSlot(rest)];
     });
     drills.push(
       buildDrill(
@@ -44,7 +78,7 @@ export function generateLiftRests(passage: Passage, options: LiftRestsOptions, c
           teacherNote: "A rest after each group lets the hand release and then land on the next position without tension.",
           studentNote: "In each rest lift the hand off the keys, let the wrist go soft, and land on the next group together.",
           hands: hand,
-          segments: [{ [hand]: slots, lead: leadOf(passage) }],
+          segments: [{ [hand]: slots, lead }],
         },
         ctx,
       ),

@@ -82,10 +82,11 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
       seen.add(key);
       const all = noteCells(A.notes.length, B.notes.length);
       const shown = all.slice(0, options.maxCells);
-      const slots: Slot[] = shown.flatMap(([x, y], c) => {
+      const slots: Slot[] = shown.flatMap(([x, y]) => {
         const cell: Slot[] = [];
         for (let r = 0; r < options.repeats; r++) {
-          cell.push({ duration: v, notes: x.map((k) => noteOf(A.notes[k])), ...(c === 0 && r === 0 && all.length > 1 ? { words: `${shown.length} of ${all.length}` } : {}) });
+          // The count stays in the title: a number on a note reads as a fingering (DRILL-RUBRIC 7).
+          cell.push({ duration: v, notes: x.map((k) => noteOf(A.notes[k])) });
           cell.push({ duration: v, notes: y.map((k) => noteOf(B.notes[k])) });
         }
         return [...cell, restSlot(v.mul(2))];

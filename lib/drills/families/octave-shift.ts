@@ -6,6 +6,7 @@
 import { z } from "zod";
 import type { Clef, Hand, Measure, Passage } from "../../score/types";
 import { buildDrill, defaultTempo, passageHands, type Slot } from "../build";
+import { countOf } from "../length";
 import { shiftOctave } from "../spell";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { sonorityItem, timelineSlots } from "./shared-2-layout";
@@ -64,7 +65,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: OctaveShiftOptions, ctx:
       ),
     );
     const reach = Math.max(...path.map(Math.abs));
-    const warnings = reach < o.octaves ? [{ code: "range", message: `Only ${reach} octave(s) ${dir}: the keyboard ends there (A0–C8).` }] : [];
+    const warnings = reach < o.octaves ? [{ code: "range", message: `Only ${countOf(reach, "octave")} ${dir}: the keyboard ends there (A0–C8).` }] : [];
     drills.push(withClefChanges(buildDrill(passage, {
       family: "octave-shift", variant: dir, hands: hand, tempo: defaultTempo(passage), warnings,
       title: `Group in octaves ${dir} and back`,

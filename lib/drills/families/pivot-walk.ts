@@ -6,10 +6,11 @@
  * the hand's comfortable span; with it off, such steps are written with a warning.
  */
 import { z } from "zod";
-import type { Hand, Passage, Pitch, Sonority } from "../../score/types";
+import type { Hand, KeySignature, Passage, Pitch, Sonority } from "../../score/types";
 import type { Drill, DrillContext, DrillFamily, DrillWarning, FamilyResult } from "../types";
 import { buildDrill, noteOf, passageHands, PIANO_RANGE, type Slot } from "../build";
 import { GROUP_BY, groupLength, groupSonorities } from "../groups";
+import { asSignature, passageKey } from "../key-mode";
 import { chromaticStep, pitchName } from "../spell";
 import { pitchSpan } from "../span";
 
@@ -48,11 +49,11 @@ export function findPivot(groups: readonly Sonority[][]): { figure: Sonority[]; 
  * @example
  * walkSteps(pitchFromName("G4"), 1, 3, [60, 64], () => true).map(pitchName); // ["G#4", "A4", "A#4"]
  */
-export function walkSteps(start: Pitch, dir: 1 | -1, max: number, others: readonly number[], fits: (p: Pitch) => boolean): Pitch[] {
+export function walkSteps(start: Pitch, dir: 1 | -1, max: number, others: readonly number[], fits: (p: Pitch) => boolean, key?: KeySignature): Pitch[] {
   const out: Pitch[] = [];
   let p = start;
   for (let i = 0; i < max; i++) {
-    p = chromaticStep(p, dir);
+    p = chromaticStep(p, dir, key);
     if (others.includes(p.midi) || p.midi < PIANO_RANGE.low || p.midi > PIANO_RANGE.high || !fits(p)) break;
     out.push(p);
   }
@@ -77,7 +78,7 @@ function walkDrill(passage: Passage, hand: Hand, figure: Sonority[], note: Pitch
   const warnings: DrillWarning[] = [];
   let moved = 0;
   for (const dir of dirs) {
-    const steps = walkSteps(note, dir, opts.maxSteps, others, (p) => !ctx.safety || !over(p));
+    const steps = walkSteps(note, dir, opts.maxSteps, others, (p) => !ctx.safety || !over(p), asSignature(passageKey(passage)));
     steps.forEach((p, i) => {
       slots.push(...figureSlots(figure, note, p, i === 0 ? (dir > 0 ? "step up" : "step down") : undefined));
       if (over(p)) warnings.push({ code: "span", message: `With ${pitchName(p)} the figure is wider than the comfortable span.` });

@@ -32,7 +32,7 @@ describe("scale-rhythm", () => {
   });
 
   test("C major in eighths: hand-written first notes, standard fingering (common practice, from memory)", () => {
-    const p = makePassage({ right: "E4/8 F4/8 G4/8 A4/8 B4/2" });
+    const p = makePassage({ right: "C4/8 D4/8 E4/8 F4/8 G4/2" });
     const [d] = scaleRhythm.generate(p, scaleRhythmOptions.parse({}), makeContext()).drills;
     const text = drillText(d.score.events);
     expect(text.slice(0, 4)).toEqual(["C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2"]);

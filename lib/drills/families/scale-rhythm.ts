@@ -1,7 +1,8 @@
 /**
  * Scale rhythm: the passage's rhythm pattern (its subdivision of the beat, tuplets included)
- * played on a two-octave scale of its key, up and down, with standard scale fingering — the same
- * motion problem without the notes of the piece.
+ * played on a two-octave scale of its key and mode (found from the notes: a minor passage gets
+ * the harmonic or melodic minor the teacher chooses), up and down, with standard scale fingering —
+ * the same motion problem without the notes of the piece. One octave when two would pass the bar cap.
  */
 import Fraction from "fraction.js";
 import { Scale } from "tonal";
@@ -10,12 +11,14 @@ import type { Hand, Passage } from "../../score/types";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { buildDrill, passageHands, restSlot, type Slot } from "../build";
 import { beatLength, groupSonorities, placeInBar } from "../groups";
+import { asSignature, keyLabel, MINOR_FORMS, passageKey, writableForm } from "../key-mode";
+import { barCap, firstWithin } from "../length";
 import { keyTonic, pitchFromName } from "../spell";
 import { scaleFingers } from "../scale-fingerings";
 
 export const scaleRhythmOptions = z.object({
   /** Minor keys use this form of the minor scale. */
-  minorForm: z.enum(["natural", "harmonic", "melodic"]).default("harmonic"),
+  minorForm: z.enum(MINOR_FORMS).default("harmonic"),
 });
 export type ScaleRhythmOptions = z.output<typeof scaleRhythmOptions>;
 
@@ -57,30 +60,34 @@ export function beatPattern(passage: Passage, hand: Hand, ctx: DrillContext): Be
  * @example
  * scaleFingering("C", "major", "right")?.slice(0, 15); // [1, 2, 3, 1, 2, 3, 4, 1, 2, 3, 1, 2, 3, 4, 5]
  */
-export function scaleFingering(tonic: string, mode: string, hand: Hand, minorForm: ScaleRhythmOptions["minorForm"] = "harmonic"): number[] | null {
-  const fingers = scaleFingers(tonic, mode === "minor" ? `${minorForm} minor` : "major", hand, 2);
+export function scaleFingering(tonic: string, mode: string, hand: Hand, minorForm: ScaleRhythmOptions["minorForm"] = "harmonic", octaves = 2): number[] | null {
+  const fingers = scaleFingers(tonic, mode === "minor" ? `${minorForm} minor` : "major", hand, octaves);
   return fingers ? [...fingers.up, ...fingers.down.slice(1)] : null;
 }
 
 /**
- * The scale of the passage's key, two octaves up and back down (29 notes), as tonal spells it.
+ * The scale of a key, two octaves (or `octaves`) up and back down (29 notes for two), as tonal spells it.
  *
  * @example
  * twoOctaveScale({ fifths: 0, mode: "major" }, 4, "harmonic").slice(0, 3); // ["C4", "D4", "E4"]
  */
-export function twoOctaveScale(key: Passage["key"], octave: number, minorForm: ScaleRhythmOptions["minorForm"]): string[] {
+export function twoOctaveScale(key: Passage["key"], octave: number, minorForm: ScaleRhythmOptions["minorForm"], octaves = 2): string[] {
   const tonic = keyTonic(key);
   const type = key.mode === "minor" ? (minorForm === "natural" ? "minor" : `${minorForm} minor`) : "major";
   // Melodic minor comes down as natural minor (common practice).
-  const up = Scale.rangeOf(`${tonic} ${type}`)(`${tonic}${octave}`, `${tonic}${octave + 2}`) as string[];
+  const up = Scale.rangeOf(`${tonic} ${type}`)(`${tonic}${octave}`, `${tonic}${octave + octaves}`) as string[];
   const downScale = type === "melodic minor" ? `${tonic} minor` : `${tonic} ${type}`;
-  const down = (Scale.rangeOf(downScale)(`${tonic}${octave + 2}`, `${tonic}${octave}`) as string[]).slice(1);
+  const down = (Scale.rangeOf(downScale)(`${tonic}${octave + octaves}`, `${tonic}${octave}`) as string[]).slice(1);
   return [...up, ...down];
 }
 
-function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options: ScaleRhythmOptions): Slot[] {
-  const names = twoOctaveScale(passage.key, hand === "right" ? 4 : 2, options.minorForm);
-  const fingers = scaleFingering(keyTonic(passage.key), passage.key.mode, hand, options.minorForm);
+function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options: ScaleRhythmOptions, octaves: number): Slot[] {
+  const pk = passageKey(passage);
+  const key = asSignature(pk);
+  const form = writableForm(pk, options.minorForm, passage);
+  const names = twoOctaveScale(key, hand === "right" ? 4 : 2, form, octaves);
+  // Scale-book fingering for this key, form and number of octaves (lib/drills/scale-fingerings.ts).
+  const fingers = scaleFingering(keyTonic(key), key.mode, hand, form, octaves);
   const fingerAt = (i: number) => fingers?.[i];
   const slots: Slot[] = [];
   const tuplet = pattern.tuplet;
@@ -106,15 +113,15 @@ function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options:
 export function generateScaleRhythm(passage: Passage, options: ScaleRhythmOptions, ctx: DrillContext): FamilyResult {
   const hands = passageHands(passage).filter((h) => passage.sonorities[h].length > 0);
   if (hands.length === 0) return { drills: [], skipped: "The passage has no notes to take a rhythm from." };
-  const tonic = keyTonic(passage.key);
-  const keyName = `${tonic} ${passage.key.mode === "minor" ? "minor" : "major"}`;
+  const pk = passageKey(passage);
+  const keyName = keyLabel(pk, writableForm(pk, options.minorForm, passage));
+  const cap = barCap(passage, ctx);
   const drills: Drill[] = [];
   const sets: (Hand | "both")[] = hands.length === 2 ? ["right", "left", "both"] : hands;
   for (const set of sets) {
     const own: Hand[] = set === "both" ? ["right", "left"] : [set];
     const pattern = beatPattern(passage, own[0], ctx);
-    const segment = Object.fromEntries(own.map((h) => [h, scaleSlots(passage, h, pattern, options)]));
-    drills.push(
+    const make = (octaves: number) => () =>
       buildDrill(
         passage,
         {
@@ -122,13 +129,13 @@ export function generateScaleRhythm(passage: Passage, options: ScaleRhythmOption
           variant: set === "both" ? "hands-together" : `${set}-hand`,
           title: `${keyName} scale in the passage's rhythm${set === "both" ? ", hands together" : hands.length > 1 ? ` (${set} hand)` : ""}`,
           teacherNote: "The scale carries the passage's exact subdivision, so the rhythm is secured on familiar notes first.",
-          studentNote: "Play the scale two octaves up and down in this rhythm, evenly, with the fingering shown.",
+          studentNote: `Play the scale ${octaves === 2 ? "two octaves" : "one octave"} up and down in this rhythm, evenly, with the fingering shown.`,
           hands: set,
-          segments: [segment],
+          segments: [Object.fromEntries(own.map((h) => [h, scaleSlots(passage, h, pattern, options, octaves)]))],
         },
         ctx,
-      ),
-    );
+      );
+    drills.push(firstWithin(cap, [make(2), make(1)]));
   }
   return { drills };
 }

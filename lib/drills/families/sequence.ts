@@ -9,6 +9,8 @@ import { z } from "zod";
 import type { Hand, KeySignature, Passage, Pitch, Sonority } from "../../score/types";
 import { buildDrill, defaultTempo, passageHands, type Slot, type SlotNote } from "../build";
 import { measureSpan, pitchSpan } from "../span";
+import { asSignature, passageKey, writableForm, type MinorForm } from "../key-mode";
+import { countOf } from "../length";
 import { spellMidi } from "../spell";
 import type { Drill, DrillContext, DrillFamily, DrillWarning, FamilyResult, HandProfile } from "../types";
 import { restOf, tupletFor } from "./shared-2-layout";
@@ -28,13 +30,13 @@ export const sequenceOptions = z.object({
 export type SequenceOptions = z.output<typeof sequenceOptions>;
 
 /**
- * Pitch of `p` in repetition `k`: k × steps scale degrees (diatonic), or k × semitones spelled
- * with sharps going up and flats going down (chromatic).
+ * Pitch of `p` in repetition `k`: k × steps scale degrees (diatonic, in the passage's key), or
+ * k × semitones spelled the key's way (chromatic: flats in flat keys, sharps in sharp keys).
  * @example movePitch(pitchFromName("E4"), 1, sequenceOptions.parse({}), { fifths: 0, mode: "major" }) // F4
  */
-export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySignature): Pitch {
+export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
   if (k === 0) return p;
-  if (o.motion === "diatonic") return diatonicShift(p, k * o.steps, key);
+  if (o.motion === "diatonic") return diatonicShift(p, k * o.steps, key, form);
   const by = k * o.semitones;
   return spellMidi(p.midi + by, key, by > 0 ? "up" : "down");
 }
@@ -44,8 +46,8 @@ export function movePitch(p: Pitch, k: number, o: SequenceOptions, key: KeySigna
  * hand): scale degrees reflected (diatonic) or semitones reflected (chromatic).
  * @example mirrorPitch(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3"), sequenceOptions.parse({}), { fifths: 0, mode: "major" }) // A2
  */
-export function mirrorPitch(axis: Pitch, p: Pitch, target: Pitch, o: SequenceOptions, key: KeySignature): Pitch {
-  if (o.motion === "diatonic") return diatonicShift(target, -degreeDistance(axis, p, key), key);
+export function mirrorPitch(axis: Pitch, p: Pitch, target: Pitch, o: SequenceOptions, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  if (o.motion === "diatonic") return diatonicShift(target, -degreeDistance(axis, p, key), key, form);
   const by = p.midi - axis.midi;
   return spellMidi(target.midi - by, key, by > 0 ? "down" : "up");
 }
@@ -74,7 +76,9 @@ function over(pitches: readonly Pitch[], profile: HandProfile): boolean {
 function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: DrillContext): Drill[] {
   const { sons, durations } = figureOf(passage.sonorities[hand], o.figureNotes);
   if (sons.length < 2) return [];
-  const key = passage.key;
+  const pk = passageKey(passage);
+  const key = asSignature(pk);
+  const form = writableForm(pk, "harmonic", passage);
   const other: Hand = hand === "right" ? "left" : "right";
   const axis = sons[0].notes[0].pitch!;
   const target: Pitch = { ...axis, octave: axis.octave + (hand === "right" ? -1 : 1), midi: axis.midi + (hand === "right" ? -12 : 12) };
@@ -86,14 +90,14 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     let mirror: Pitch[][] = [];
     let fits = true;
     try {
-      main = sons.map((s) => s.notes.map((n) => movePitch(n.pitch!, k, o, key)));
-      mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key)));
+      main = sons.map((s) => s.notes.map((n) => movePitch(n.pitch!, k, o, key, form)));
+      mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key, form)));
       fits = onPiano([...main.flat(), ...(withMirror ? mirror.flat() : [])]);
     } catch {
       fits = false; // far off the keyboard: tonal cannot even name the note
     }
     if (!fits) {
-      warnings.push({ code: "range", message: `Stopped after ${k} repetition(s): the next one leaves the keyboard (A0–C8).` });
+      warnings.push({ code: "range", message: `Stopped after ${countOf(k, "repetition")}: the next one leaves the keyboard (A0–C8).` });
       break;
     }
     if (k === 0 && withMirror && ctx.safety && mirror.some((ps) => over(ps, ctx.profile))) {
@@ -101,7 +105,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
       warnings.push({ code: "span", message: "No mirror: upside down, a chord of the figure stretches past the hand profile." });
     }
     if (k > 0 && ctx.safety && [...main, ...(withMirror ? mirror : [])].some((ps) => over(ps, ctx.profile))) {
-      warnings.push({ code: "span", message: `Stopped after ${k} repetition(s): the next one stretches past the hand profile.` });
+      warnings.push({ code: "span", message: `Stopped after ${countOf(k, "repetition")}: the next one stretches past the hand profile.` });
       break;
     }
     reps.push({ main, mirror });
@@ -115,7 +119,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
       }),
     );
   const figureLength = durations.reduce((a, b) => a.add(b));
-  const motion = o.motion === "diatonic" ? `${Math.abs(o.steps)} scale step(s)` : `${Math.abs(o.semitones)} semitone(s)`;
+  const motion = o.motion === "diatonic" ? countOf(Math.abs(o.steps), "scale step") : countOf(Math.abs(o.semitones), "semitone");
   const up = (o.motion === "diatonic" ? o.steps : o.semitones) > 0 ? "up" : "down";
   const make = (n: number, extra: readonly DrillWarning[]): Drill[] => {
     const base = { family: "sequence", tempo: defaultTempo(passage), warnings: [...warnings, ...extra] };
@@ -144,7 +148,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
   let n = reps.length;
   while (n > 1 && drills.some((d) => overAfter(d, figureLength, ctx.profile))) {
     n--;
-    drills = make(n, [{ code: "span", message: `Stopped after ${n} repetition(s): the next one stretches past the hand profile.` }]);
+    drills = make(n, [{ code: "span", message: `Stopped after ${countOf(n, "repetition")}: the next one stretches past the hand profile.` }]);
   }
   return drills;
 }

@@ -5,18 +5,26 @@
  */
 import { Interval, Note, Scale } from "tonal";
 import type { KeySignature, Pitch } from "../../score/types";
-import { keyScaleName, pitchFromName as namePitch, pitchName, transposePitch } from "../spell";
+import { scaleNameOf, type MinorForm } from "../key-mode";
+import { keyTonic, pitchFromName as namePitch, pitchName, transposePitch } from "../spell";
 
 /** Lowest and highest piano keys as MIDI numbers: A0 = 21, C8 = 108 (FACTS.md §1). */
 export const PIANO_LOW = 21;
 export const PIANO_HIGH = 108;
 
+/** Tonal's scale name of a key signature with the minor form used for moves in minor keys. */
+function scaleName(key: KeySignature, form: MinorForm): string {
+  return scaleNameOf({ tonic: keyTonic(key), mode: key.mode === "minor" ? "minor" : "major", fifths: key.fifths }, form);
+}
+
 /**
- * The pitch classes of the key's scale, as tonal's `Scale.get(...).notes` spells them.
+ * The pitch classes of the key's scale, as tonal's `Scale.get(...).notes` spells them; a minor
+ * key in the given form (harmonic by default, so the leading tone is a scale note).
  * @example keyScale({ fifths: 0, mode: "major" }) // ["C", "D", "E", "F", "G", "A", "B"]
+ * @example keyScale({ fifths: 0, mode: "minor" }) // ["A", "B", "C", "D", "E", "F", "G#"]
  */
-export function keyScale(key: KeySignature): string[] {
-  const name = keyScaleName(key);
+export function keyScale(key: KeySignature, form: MinorForm = "harmonic"): string[] {
+  const name = scaleName(key, form);
   let notes = SCALES.get(name);
   if (!notes) SCALES.set(name, (notes = Scale.get(name).notes));
   return [...notes];
@@ -41,31 +49,35 @@ function scalePosition(p: Pitch, scale: readonly string[]): { degree: number; oc
 }
 
 /**
- * Moves a pitch by `steps` degrees of the key's scale; a note outside the scale keeps its
- * chromatic offset from its degree. Uses tonal's `Scale.degrees` for the scale notes.
+ * Moves a pitch by `steps` degrees of the key's scale (minor keys: harmonic minor); a note outside
+ * the scale keeps its chromatic offset from its degree unless that would need a double sharp or
+ * flat, when it takes the plain scale note (a diatonic move keeps the key's spelling). Uses
+ * tonal's `Scale.degrees` for the scale notes.
  * @example diatonicShift(pitchFromName("E4"), 1, { fifths: 0, mode: "major" }) // F4
+ * @example diatonicShift(pitchFromName("G#4"), 1, { fifths: 0, mode: "minor" }) // A4 (G♯ is A minor's leading tone)
  */
-export function diatonicShift(p: Pitch, steps: number, key: KeySignature): Pitch {
-  const memo = `${p.step}${p.alter}${p.octave}|${steps}|${key.fifths}${key.mode}`;
+export function diatonicShift(p: Pitch, steps: number, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  const memo = `${p.step}${p.alter}${p.octave}|${steps}|${key.fifths}${key.mode}|${form}`;
   let found = SHIFTS.get(memo);
   if (!found) {
-    found = shiftBySteps(p, steps, key);
+    found = shiftBySteps(p, steps, key, form);
     if (SHIFTS.size > 8192) SHIFTS.clear();
     SHIFTS.set(memo, found);
   }
   return { ...found };
 }
 
-function shiftBySteps(p: Pitch, steps: number, key: KeySignature): Pitch {
-  const scale = keyScale(key);
+function shiftBySteps(p: Pitch, steps: number, key: KeySignature, form: MinorForm): Pitch {
+  const scale = keyScale(key, form);
   const pos = scalePosition(p, scale);
   const tonic = `${scale[0]}${pos.octave}`;
-  const degreeOf = Scale.degrees(`${tonic} ${keyScaleName(key).split(" ")[1]}`);
+  const name = scaleName(key, form);
+  const degreeOf = Scale.degrees(`${tonic} ${name.slice(name.indexOf(" ") + 1)}`);
   const k = pos.degree + steps;
   const target = namePitch(degreeOf(k >= 0 ? k + 1 : k));
   let out = target;
   for (let i = 0; i < Math.abs(pos.alter); i++) out = transposePitch(out, pos.alter > 0 ? "1A" : "-1A");
-  return out;
+  return Math.abs(out.alter) >= 2 ? target : out;
 }
 
 /**
@@ -98,8 +110,8 @@ export function mirrorChromatic(axis: Pitch, p: Pitch, target: Pitch): Pitch {
  * k degrees below `target`.
  * @example mirrorDiatonic(pitchFromName("C4"), pitchFromName("E4"), pitchFromName("C3"), { fifths: 0, mode: "major" }) // A2
  */
-export function mirrorDiatonic(axis: Pitch, p: Pitch, target: Pitch, key: KeySignature): Pitch {
-  return diatonicShift(target, -degreeDistance(axis, p, key), key);
+export function mirrorDiatonic(axis: Pitch, p: Pitch, target: Pitch, key: KeySignature, form: MinorForm = "harmonic"): Pitch {
+  return diatonicShift(target, -degreeDistance(axis, p, key), key, form);
 }
 
 /**

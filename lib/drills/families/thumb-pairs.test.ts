@@ -1,8 +1,9 @@
 import fc from "fast-check";
-import { Note, Scale } from "tonal";
+import { Key, Note, Scale } from "tonal";
 import { describe, expect, test } from "vitest";
 import { makeContext } from "../build";
 import { keyScaleName, pitchName } from "../spell";
+import { passageKey, writableForm } from "../key-mode";
 import { makePassage } from "../test-passages";
 import type { Drill } from "../types";
 import { barProblems } from "./shared-2-layout";
@@ -72,7 +73,12 @@ describe("thumb-pairs", () => {
           const all = generateThumbPairs(pass, o, ctx).drills;
           for (const x of all) for (const e of notes(x)) expect(e.pitch!.midi >= 21 && e.pitch!.midi <= 108, x.variant).toBe(true);
           const d = all[0];
-          const expected = Scale.get(keyScaleName(key)).notes;
+          // The passage's key (from its notes and signature); minor in harmonic form by default.
+          // Reference: tonal's Scale.get(...).notes for major, Key.minorKey(...).harmonic.scale for minor.
+          const pk = passageKey(pass);
+          // (natural minor where the harmonic form would need a double sharp the passage does not have).
+          const expected = pk.mode === "major" ? Scale.get(`${pk.tonic} major`).notes : Key.minorKey(pk.tonic)[writableForm(pk, "harmonic", pass)].scale;
+          expect(keyScaleName({ fifths, mode: pk.mode })).toBe(`${pk.tonic} ${pk.mode}`);
           const pcs = notes(d).map((e) => Note.pitchClass(pitchName(e.pitch!)));
           for (let i = 0; i < 7 * octaves; i++) expect(pcs[i]).toBe(expected[i % 7]);
           expect(new Set(fingers(d))).toEqual(new Set([1, k]));

@@ -1,5 +1,5 @@
 /**
- * `thumb-pairs`: a scale of the passage's key fingered only with the thumb and one other finger
+ * `thumb-pairs`: a scale of the passage's key and mode (a minor passage in the chosen minor form) fingered only with the thumb and one other finger
  * in turn (fingers 2, 3 and 4), so the thumb passes under on every other note; and five-finger
  * patterns re-fingered so the thumb takes over a finger's note, or the hand moves sideways.
  */
@@ -8,7 +8,9 @@ import { Note, Scale } from "tonal";
 import { z } from "zod";
 import type { Hand, Passage } from "../../score/types";
 import { buildDrill, defaultTempo, passageHands, type Slot } from "../build";
-import { keyScaleName, keyTonic, pitchFromName } from "../spell";
+import { asSignature, MINOR_FORMS, passageKey, scaleNameOf, writableForm } from "../key-mode";
+import { barCap, firstWithin } from "../length";
+import { keyTonic, pitchFromName } from "../spell";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { fingered } from "./shared-2-layout";
 
@@ -24,6 +26,8 @@ export const thumbPairsOptions = z.object({
   takeover: z.number().int().min(2).max(5).default(3),
   /** Positions the five-finger pattern moves up before coming back. */
   positions: z.number().int().min(2).max(7).default(3),
+  /** Minor passages use this form of the minor scale (melodic comes down as natural minor). */
+  minorForm: z.enum(MINOR_FORMS).default("harmonic"),
 });
 export type ThumbPairsOptions = z.output<typeof thumbPairsOptions>;
 
@@ -43,7 +47,7 @@ export function scaleNotes(scaleWithOctave: string, from: number, to: number): s
 function tonicOctave(passage: Passage, hand: Hand): number {
   const m = passage.sonorities[hand].flatMap((s) => s.notes.map((n) => n.pitch!.midi));
   const mean = m.length ? m.reduce((a, b) => a + b, 0) / m.length : hand === "right" ? 66 : 50;
-  const tonic = keyTonic(passage.key);
+  const tonic = keyTonic(asSignature(passageKey(passage)));
   let best = 4;
   for (let oct = 1; oct <= 6; oct++) {
     const d = Math.abs((Note.midi(`${tonic}${oct}`) ?? 0) - (mean - 6));
@@ -87,49 +91,67 @@ export function onKeyboard(names: readonly string[]): string[] | null {
 }
 
 function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: DrillContext): Drill[] {
-  const scale = `${keyTonic(passage.key)}${tonicOctave(passage, hand)} ${keyScaleName(passage.key).split(" ")[1]}`;
+  const pk = passageKey(passage);
+  const form = writableForm(pk, o.minorForm, passage);
+  const name = scaleNameOf(pk, form);
+  const oct = tonicOctave(passage, hand);
+  const scale = `${pk.tonic}${oct} ${name.slice(name.indexOf(" ") + 1)}`;
+  // Melodic minor comes down as natural minor (common practice).
+  const downName = form === "melodic" && pk.mode === "minor" ? scaleNameOf(pk, "natural") : name;
+  const down = `${pk.tonic}${oct} ${downName.slice(downName.indexOf(" ") + 1)}`;
   const value = VALUES[o.value];
-  const top = 7 * o.octaves;
-  const names = onKeyboard([...scaleNotes(scale, 0, top), ...scaleNotes(scale, top - 1, 0)]);
-  if (!names) return [];
+  const cap = barCap(passage, ctx);
   const base = { family: "thumb-pairs", hands: hand, tempo: defaultTempo(passage) };
+  const upAndDown = (octaves: number) => onKeyboard([...scaleNotes(scale, 0, 7 * octaves), ...scaleNotes(down, 7 * octaves - 1, 0)]);
+  if (!upAndDown(o.octaves)) return [];
+  const octaveChoices = Array.from({ length: o.octaves }, (_, i) => o.octaves - i);
   const drills: Drill[] = o.fingers.map((k) =>
-    buildDrill(passage, {
-      ...base, variant: `thumb-and-${k}`, title: `Scale with thumb and ${k}`,
-      teacherNote: "With only two fingers, the thumb has to pass on every other note; a smooth result shows a free thumb and a quiet arm.",
-      studentNote: `Play the scale up and down using only the thumb and finger ${k} in turn; keep the line smooth and the elbow still.`,
-      segments: [{ [hand]: slotsOf(names, pairFingers(names.length, k, hand), value) }],
-    }, ctx),
+    firstWithin(cap, octaveChoices.map((n) => () => {
+      const names = upAndDown(n) ?? [];
+      return buildDrill(passage, {
+        ...base, variant: `thumb-and-${k}`, title: `Scale with thumb and ${k}`,
+        teacherNote: "With only two fingers, the thumb has to pass on every other note; a smooth result shows a free thumb and a quiet arm.",
+        studentNote: `Play the scale up and down using only the thumb and finger ${k} in turn; keep the line smooth and the elbow still.`,
+        segments: [{ [hand]: slotsOf(names, pairFingers(names.length, k, hand), value) }],
+      }, ctx);
+    })),
   );
   if (!o.fiveFinger) return drills;
   // Sideways: the five-finger pattern up and back, on each position, then back down.
-  const starts = [...Array.from({ length: o.positions }, (_, i) => i), ...Array.from({ length: o.positions - 1 }, (_, i) => o.positions - 2 - i)];
   const up = hand === "right" ? [1, 2, 3, 4, 5, 4, 3, 2] : [5, 4, 3, 2, 1, 2, 3, 4];
-  const side = starts.flatMap((s) => scaleNotes(scale, s, s + 4).concat(scaleNotes(scale, s + 3, s + 1)));
-  const sideFingers = starts.flatMap(() => up);
-  drills.push(buildDrill(passage, {
-    ...base, variant: "five-finger-sideways", title: "Five-finger pattern moving sideways",
-    teacherNote: "Moving a fixed hand shape one key at a time trains the lateral move without any thumb passing.",
-    studentNote: "Play the five-finger pattern up and back, then move the whole hand one key over; keep the shape of the hand the same.",
-    segments: [{ [hand]: slotsOf(onKeyboard([...side, scaleNotes(scale, 0, 0)[0]]) ?? [], [...sideFingers, hand === "right" ? 1 : 5], value) }],
-  }, ctx));
+  const sideways = (positions: number) => () => {
+    const starts = [...Array.from({ length: positions }, (_, i) => i), ...Array.from({ length: positions - 1 }, (_, i) => positions - 2 - i)];
+    const side = starts.flatMap((s) => scaleNotes(scale, s, s + 4).concat(scaleNotes(scale, s + 3, s + 1)));
+    const sideFingers = starts.flatMap(() => up);
+    return buildDrill(passage, {
+      ...base, variant: "five-finger-sideways", title: "Five-finger pattern moving sideways",
+      teacherNote: "Moving a fixed hand shape one key at a time trains the lateral move without any thumb passing.",
+      studentNote: "Play the five-finger pattern up and back, then move the whole hand one key over; keep the shape of the hand the same.",
+      segments: [{ [hand]: slotsOf(onKeyboard([...side, scaleNotes(scale, 0, 0)[0]]) ?? [], [...sideFingers, hand === "right" ? 1 : 5], value) }],
+    }, ctx);
+  };
+  drills.push(firstWithin(cap, Array.from({ length: o.positions - 1 }, (_, i) => sideways(o.positions - i))));
   // Takeover: fingers 1…k on consecutive notes (right hand up, left hand down), then the thumb retakes finger k's note.
   const k = o.takeover;
   const dir = hand === "right" ? 1 : -1;
-  const cells: { name: string; finger: number }[] = [];
-  let start = 0;
-  for (; Math.abs(start + dir * (k - 1)) <= top; start += dir * (k - 1)) {
-    scaleNotes(scale, start, start + dir * (k - 1)).forEach((name, i) => cells.push({ name, finger: i + 1 }));
-  }
-  if (Math.abs(start) < top) {
-    scaleNotes(scale, start, dir * top).forEach((name, i) => cells.push({ name, finger: i + 1 }));
-  }
-  drills.push(buildDrill(passage, {
-    ...base, variant: `thumb-takes-${k}`, title: `Thumb takes over finger ${k}`,
-    teacherNote: "Taking a note over with the thumb moves the hand into the next position without a gap or a bump.",
-    studentNote: `Play fingers 1 to ${k} on the scale; the thumb then plays the same key finger ${k} just played, and the hand carries on from there.`,
-    segments: [{ [hand]: slotsOf(onKeyboard(cells.map((c) => c.name)) ?? [], cells.map((c) => c.finger), value) }],
-  }, ctx));
+  const takeover = (octaves: number) => () => {
+    const top = 7 * octaves;
+    const cells: { name: string; finger: number }[] = [];
+    let start = 0;
+    for (; Math.abs(start + dir * (k - 1)) <= top; start += dir * (k - 1)) {
+      scaleNotes(scale, start, start + dir * (k - 1)).forEach((n, i) => cells.push({ name: n, finger: i + 1 }));
+    }
+    if (Math.abs(start) < top) {
+      scaleNotes(scale, start, dir * top).forEach((n, i) => cells.push({ name: n, finger: i + 1 }));
+    }
+    return buildDrill(passage, {
+      ...base, variant: `thumb-takes-${k}`, title: `Thumb takes over finger ${k}`,
+      teacherNote: "Taking a note over with the thumb moves the hand into the next position without a gap or a bump.",
+      studentNote: `Play fingers 1 to ${k} on the scale; the thumb then plays the same key finger ${k} just played, and the hand carries on from there.`,
+      segments: [{ [hand]: slotsOf(onKeyboard(cells.map((c) => c.name)) ?? [], cells.map((c) => c.finger), value) }],
+    }, ctx);
+  };
+  drills.push(firstWithin(cap, octaveChoices.map(takeover)));
   return drills;
 }
 
