@@ -4,6 +4,9 @@ import { saveSheet } from "@/db/queries/sheets";
 import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
 import { requestProblems } from "@/lib/generate-request";
 import { drillsForStudioKnot } from "@/lib/knot-request";
+import { readJsonCapped } from "@/lib/limits/body";
+import { isWorkLimitError } from "@/lib/limits/work";
+import { isScoreError } from "@/lib/score";
 import { pickedDrills, SaveSheetRequest } from "@/lib/sheet-save";
 
 export const dynamic = "force-dynamic";
@@ -12,10 +15,23 @@ export const dynamic = "force-dynamic";
 export async function POST(request: Request) {
   const ctx = await apiTeacher();
   if (ctx instanceof Response) return ctx;
-  const parsed = SaveSheetRequest.safeParse(await request.json().catch(() => undefined));
+  let body: unknown;
+  try {
+    body = await readJsonCapped(request);
+  } catch {
+    return jsonError(413, "The sheet is too large to save.");
+  }
+  const parsed = SaveSheetRequest.safeParse(body);
   if (!parsed.success) return jsonError(400, "The sheet could not be saved.", requestProblems(parsed.error));
   const { knotId, title, request: req, drills } = parsed.data;
-  const out = await drillsForStudioKnot(ctx.studioId, knotId, req);
+  let out;
+  try {
+    out = await drillsForStudioKnot(ctx.studioId, knotId, req);
+  } catch (err) {
+    if (isWorkLimitError(err)) return jsonError(422, err.message);
+    if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
+    throw err;
+  }
   if (!out) return notFoundResponse();
   let rows;
   try {

@@ -2,6 +2,7 @@ import { apiTeacher, jsonError, notFoundResponse } from "@/lib/api-session";
 import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/drill-files";
 import { GenerateRequest, requestProblems } from "@/lib/generate-request";
 import { drillsForStudioKnot } from "@/lib/knot-request";
+import { isWorkLimitError } from "@/lib/limits/work";
 import { writeMusicXML } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -23,7 +24,13 @@ export async function GET(request: Request) {
   }
   const parsed = GenerateRequest.safeParse(raw);
   if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
-  const out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
+  let out;
+  try {
+    out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
+  } catch (err) {
+    if (isWorkLimitError(err)) return jsonError(422, err.message);
+    throw err;
+  }
   const found = out?.drills.find((d) => d.key === key);
   if (!found) return notFoundResponse();
   return downloadResponse(drillFile(writeMusicXML(found.drill.score), found.drill.title, format));
