@@ -53,6 +53,8 @@ export const auth = betterAuth({
   disabledPaths: ["/sign-up/email"],
   rateLimit: {
     enabled: true,
+    // In the database (db/limits-schema.ts rateLimit), so a limit holds across app servers.
+    storage: "database",
     window: env.AUTH_RATE_LIMIT_WINDOW,
     max: env.AUTH_RATE_LIMIT_MAX,
     customRules: {
