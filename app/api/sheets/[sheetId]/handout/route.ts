@@ -1,6 +1,7 @@
 import { db } from "@/db";
 import { apiMember, jsonError, notFoundResponse } from "@/lib/api-session";
-import { PAPER_SIZES, renderHandoutPdf, type Paper } from "@/lib/handout";
+import { PAPER_SIZES, type Paper } from "@/lib/handout";
+import { handoutPdf } from "@/lib/jobs/render-cache";
 import { canReadSheet } from "@/lib/sheet-access";
 import { handoutFileName, loadHandoutInput } from "./handout-data";
 
@@ -23,7 +24,8 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
   const paper = asked as Paper;
   const input = await loadHandoutInput(db, ctx, sheetId, paper, url.searchParams.get("assignment"));
   if (!input) return notFoundResponse();
-  const pdf = await renderHandoutPdf(input);
+  // Kept by content: the same sheet, paper, names and goals are rendered once (lib/jobs/render-cache.ts).
+  const pdf = await handoutPdf(input);
   const download = url.searchParams.get("download") === "1";
   return new Response(Buffer.from(pdf), {
     headers: {
