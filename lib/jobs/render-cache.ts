@@ -6,8 +6,10 @@
 import { renderHandoutPdf } from "../handout/render-handout-pdf";
 import type { HandoutInput } from "../handout/input";
 import { contentCache } from "./content-cache";
+import { heavyWork } from "./gate";
 
-const handouts = contentCache("handout", (input: HandoutInput) => renderHandoutPdf(input), {
+// A cached handout is answered at once; a new one waits its turn in the bounded queue (lib/jobs/gate.ts).
+const handouts = contentCache("handout", (input: HandoutInput) => heavyWork.run(() => renderHandoutPdf(input)), {
   maxEntries: 64,
   maxBytes: 64 * 1024 * 1024,
   weigh: (pdf) => pdf.byteLength,

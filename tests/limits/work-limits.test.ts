@@ -125,3 +125,26 @@ describe("upload of the bounds corpus", () => {
     expect(fs.existsSync(dir) ? fs.readdirSync(dir, { recursive: true }).filter((f) => !fs.statSync(path.join(dir, String(f))).isDirectory()) : []).toEqual([]);
   });
 });
+
+describe("the bounded queue of heavy work", () => {
+  test("when it is full, generate answers 503 with Retry-After at once; when it drains, 200", async () => {
+    const { heavyWork } = await import("../../lib/jobs/gate");
+    const { seededKnot } = await import("../sheets/fixture");
+    const knotId = (await seededKnot(t.db)).id;
+    let release!: () => void;
+    const held = new Promise<void>((r) => (release = r));
+    // Two running and sixteen waiting: the gate's capacity (lib/jobs/gate.ts heavyWork).
+    const blockers = Array.from({ length: 18 }, () => heavyWork.run(() => held));
+    const body = JSON.stringify({ families: ["blocking"], options: {}, seed: 4242 });
+    const t0 = performance.now();
+    const busy = await drillsRoute.POST(new Request(`http://localhost/api/knots/${knotId}/drills`, { method: "POST", body }), { params: Promise.resolve({ knotId }) });
+    expect(performance.now() - t0).toBeLessThan(2000);
+    expect(busy.status).toBe(503);
+    expect(Number(busy.headers.get("retry-after"))).toBeGreaterThan(0);
+    expect(((await busy.json()) as { message: string }).message).toMatch(/busy/);
+    release();
+    await Promise.all(blockers);
+    const ok = await drillsRoute.POST(new Request(`http://localhost/api/knots/${knotId}/drills`, { method: "POST", body }), { params: Promise.resolve({ knotId }) });
+    expect(ok.status).toBe(200);
+  });
+});

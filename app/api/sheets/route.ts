@@ -6,6 +6,7 @@ import { requestProblems } from "@/lib/generate-request";
 import { drillsForStudioKnot } from "@/lib/knot-request";
 import { readJsonCapped } from "@/lib/limits/body";
 import { isWorkLimitError } from "@/lib/limits/work";
+import { busyResponse, heavyWork, QueueFullError } from "@/lib/jobs/gate";
 import { isScoreError } from "@/lib/score";
 import { pickedDrills, SaveSheetRequest } from "@/lib/sheet-save";
 
@@ -26,8 +27,9 @@ export async function POST(request: Request) {
   const { knotId, title, request: req, drills } = parsed.data;
   let out;
   try {
-    out = await drillsForStudioKnot(ctx.studioId, knotId, req);
+    out = await heavyWork.run(() => drillsForStudioKnot(ctx.studioId, knotId, req));
   } catch (err) {
+    if (err instanceof QueueFullError) return busyResponse(err);
     if (isWorkLimitError(err)) return jsonError(422, err.message);
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
     throw err;

@@ -3,6 +3,7 @@ import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/
 import { GenerateRequest, requestProblems } from "@/lib/generate-request";
 import { drillsForStudioKnot } from "@/lib/knot-request";
 import { isWorkLimitError } from "@/lib/limits/work";
+import { busyResponse, heavyWork, QueueFullError } from "@/lib/jobs/gate";
 import { writeMusicXML } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -26,8 +27,9 @@ export async function GET(request: Request) {
   if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
   let out;
   try {
-    out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
+    out = await heavyWork.run(() => drillsForStudioKnot(ctx.studioId, knotId, parsed.data));
   } catch (err) {
+    if (err instanceof QueueFullError) return busyResponse(err);
     if (isWorkLimitError(err)) return jsonError(422, err.message);
     throw err;
   }

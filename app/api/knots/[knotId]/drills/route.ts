@@ -5,6 +5,7 @@ import { GenerateRequest, requestProblems } from "@/lib/generate-request";
 import { knotDrillsBody } from "@/lib/knot-drills-cache";
 import { readJsonCapped } from "@/lib/limits/body";
 import { isWorkLimitError } from "@/lib/limits/work";
+import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
 import { isScoreError } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -39,6 +40,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
   } catch (err) {
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
     if (isWorkLimitError(err)) return jsonError(422, err.message);
+    if (err instanceof QueueFullError) return busyResponse(err);
     throw err;
   }
 }

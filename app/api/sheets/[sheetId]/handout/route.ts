@@ -1,6 +1,7 @@
 import { db } from "@/db";
 import { apiMember, jsonError, notFoundResponse } from "@/lib/api-session";
 import { PAPER_SIZES, type Paper } from "@/lib/handout";
+import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
 import { handoutPdf } from "@/lib/jobs/render-cache";
 import { canReadSheet } from "@/lib/sheet-access";
 import { handoutFileName, loadHandoutInput } from "./handout-data";
@@ -25,7 +26,13 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
   const input = await loadHandoutInput(db, ctx, sheetId, paper, url.searchParams.get("assignment"));
   if (!input) return notFoundResponse();
   // Kept by content: the same sheet, paper, names and goals are rendered once (lib/jobs/render-cache.ts).
-  const pdf = await handoutPdf(input);
+  let pdf: Uint8Array;
+  try {
+    pdf = await handoutPdf(input);
+  } catch (err) {
+    if (err instanceof QueueFullError) return busyResponse(err);
+    throw err;
+  }
   const download = url.searchParams.get("download") === "1";
   return new Response(Buffer.from(pdf), {
     headers: {
