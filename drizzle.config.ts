@@ -1,7 +1,7 @@
 import { defineConfig } from "drizzle-kit";
 
 export default defineConfig({
-  schema: ["./db/schema.ts", "./db/auth-schema.ts"],
+  schema: ["./db/schema.ts", "./db/auth-schema.ts", "./db/limits-schema.ts"],
   out: "./db/migrations",
   dialect: "turso",
   dbCredentials: {

@@ -29,6 +29,8 @@ const securityHeaders = [
 ];
 
 const nextConfig: NextConfig = {
+  // No X-Powered-By: Next.js header (OWASP HTTP Headers Cheat Sheet: remove fingerprinting headers).
+  poweredByHeader: false,
   // A second build folder (e.g. for the hardening suite) so two builds never overwrite each other.
   distDir: process.env.KNOTWORK_DIST_DIR || ".next",
   serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],

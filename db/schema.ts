@@ -7,6 +7,7 @@ import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-or
 import { user } from "./auth-schema";
 
 export * from "./auth-schema";
+export * from "./limits-schema";
 
 const id = () =>
   text("id")

@@ -13,6 +13,8 @@ const EnvSchema = z.object({
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().positive().default(60),
   /** Sign-in attempts per window from one address (on top of the per-account limit). */
   AUTH_SIGN_IN_MAX: z.coerce.number().int().positive().default(10),
+  /** Reverse proxies whose X-Forwarded-For is believed (addresses or CIDR ranges, comma separated); unset: the socket address. */
+  TRUSTED_PROXY: z.string().optional(),
   UPLOADTHING_TOKEN: z.string().optional(),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Knotwork <no-reply@knotwork.test>"),

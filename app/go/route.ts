@@ -13,7 +13,7 @@ function goTo(pathname: string) {
 export async function GET(request: NextRequest) {
   const session = await auth.api.getSession({ headers: request.headers });
   if (!session) return goTo("/sign-in");
-  const member = await findMembershipForUser(db, session.user.id);
+  const member = await findMembershipForUser(db, session.user.id, session.session.id);
   if (!member) return goTo("/");
   return goTo(homePathFor(member.role));
 }

@@ -1,5 +1,6 @@
-import { asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type { Db } from "../index";
+import { session } from "../auth-schema";
 import { membership, studio } from "../schema";
 import { preparedFor } from "./prepared";
 
@@ -20,8 +21,31 @@ const membershipOfUser = preparedFor((database: Db) =>
     .prepare(),
 );
 
-/** The caller's membership (the oldest, if a user ever has several) with its studio name. One indexed look-up (membership_user_idx). */
-export async function findMembershipForUser(database: Db, userId: string) {
-  const rows = await membershipOfUser(database).all({ userId });
+/** The same, only while the session row still exists (revoked sessions lose their studio at once). */
+const membershipOfSession = preparedFor((database: Db) =>
+  database
+    .select({
+      membershipId: membership.id,
+      studioId: membership.studioId,
+      role: membership.role,
+      studioName: studio.name,
+    })
+    .from(membership)
+    .innerJoin(studio, eq(studio.id, membership.studioId))
+    .innerJoin(session, and(eq(session.id, sql.placeholder("sessionId")), eq(session.userId, membership.userId)))
+    .where(eq(membership.userId, sql.placeholder("userId")))
+    .orderBy(asc(membership.createdAt))
+    .limit(1)
+    .prepare(),
+);
+
+/**
+ * The caller's membership (the oldest, if a user ever has several) with its studio name. One indexed
+ * look-up (membership_user_idx). With `sessionId`, null as soon as that session row is gone: a session
+ * revoked on the server (password reset, sign-out elsewhere) loses access at once, even while the
+ * browser still holds better-auth's signed cookie copy of it.
+ */
+export async function findMembershipForUser(database: Db, userId: string, sessionId?: string) {
+  const rows = sessionId === undefined ? await membershipOfUser(database).all({ userId }) : await membershipOfSession(database).all({ userId, sessionId });
   return rows[0] ?? null;
 }

@@ -18,6 +18,7 @@ import { db } from "../../db";
 import * as schema from "../../db/schema";
 import { authSecret, readEnv } from "../env";
 import { resetPasswordMail, sendMail } from "../mail";
+import { afterPasswordReset } from "../security/password-reset";
 import { signInLimitHooks } from "./sign-in-limit";
 import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
@@ -55,6 +56,9 @@ export const auth = betterAuth({
     minPasswordLength: MIN_PASSWORD_LENGTH,
     maxPasswordLength: MAX_PASSWORD_LENGTH,
     resetPasswordTokenExpiresIn: 60 * 60,
+    // A reset signs out every device and voids the user's other reset links (lib/security/password-reset.ts).
+    revokeSessionsOnPasswordReset: true,
+    onPasswordReset: afterPasswordReset,
     sendResetPassword: async ({ user, url }) => {
       await sendMail({ to: user.email, ...resetPasswordMail({ name: user.name, link: url }) });
     },
@@ -62,6 +66,8 @@ export const auth = betterAuth({
   disabledPaths: ["/sign-up/email"],
   rateLimit: {
     enabled: true,
+    // In the database (db/limits-schema.ts rateLimit), so a limit holds across app servers.
+    storage: "database",
     window: env.AUTH_RATE_LIMIT_WINDOW,
     max: env.AUTH_RATE_LIMIT_MAX,
     customRules: {

@@ -31,7 +31,7 @@ export const getAuthSession = cache(async (): Promise<AuthSession | null> => {
 export const getStudioContext = cache(async (): Promise<StudioContext | null> => {
   const session = await getAuthSession();
   if (!session) return null;
-  const member = await findMembershipForUser(db, session.user.id);
+  const member = await findMembershipForUser(db, session.user.id, session.session.id);
   if (!member) return null;
   return {
     user: { id: session.user.id, name: session.user.name, email: session.user.email },

@@ -3,9 +3,11 @@
  * limiter (and lib/auth/rate-limit) key on the first X-Forwarded-For address, which a client can change
  * on every request. Here failed passwords are counted per e-mail address in a fixed window; once an
  * address has used up its tries, every sign-in for it (even with the right password) answers 429
- * until the window ends. A successful sign-in clears the count. One process's memory.
+ * until the window ends. A successful sign-in clears the count. Kept in the database
+ * (lib/limits/counter.ts), so the count holds across app servers sharing it.
  */
 import { APIError, createAuthMiddleware, isAPIError } from "better-auth/api";
+import { dbFailureCounter } from "../limits/counter";
 
 /** Failed sign-ins allowed per e-mail address and window (common practice: about 10 per 15 minutes). */
 export const SIGN_IN_FAILURES_MAX = 10;
@@ -60,7 +62,8 @@ export function createFailureCounter(max: number, windowMs: number) {
   };
 }
 
-const failures = createFailureCounter(SIGN_IN_FAILURES_MAX, SIGN_IN_FAILURE_WINDOW_MS);
+// In the database, so the count holds across app servers (lib/limits/counter.ts); createFailureCounter above is the in-memory model of the same rule.
+const failures = dbFailureCounter("sign-in-failures", SIGN_IN_FAILURES_MAX, SIGN_IN_FAILURE_WINDOW_MS);
 
 /** The e-mail address a sign-in body names, normalised as better-auth stores it (lower case). */
 function emailOf(body: unknown): string | null {
@@ -76,7 +79,7 @@ export const signInLimitHooks = {
     if (ctx.path !== SIGN_IN_PATH) return;
     const email = emailOf(ctx.body);
     if (!email) return;
-    const wait = failures.blockedFor(email);
+    const wait = await failures.blockedFor(email);
     if (wait > 0) {
       throw new APIError("TOO_MANY_REQUESTS", { message: TOO_MANY_FAILURES_MESSAGE, code: "TOO_MANY_FAILED_SIGN_INS" }, { "Retry-After": String(Math.ceil(wait / 1000)) });
     }
@@ -88,9 +91,9 @@ export const signInLimitHooks = {
     const returned = ctx.context.returned;
     if (isAPIError(returned)) {
       // 401: better-auth's INVALID_EMAIL_OR_PASSWORD (unknown e-mail or wrong password alike).
-      if (returned.statusCode === 401) failures.fail(email);
+      if (returned.statusCode === 401) await failures.fail(email);
     } else if (returned !== undefined) {
-      failures.clear(email);
+      await failures.clear(email);
     }
   }),
 };

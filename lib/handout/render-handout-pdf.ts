@@ -9,7 +9,7 @@ import { FONT, handoutFontPath, registerHandoutFonts } from "./fonts";
 import { HandoutInputSchema, PAGE_SIZE_PT, type HandoutInput } from "./input";
 import { contentBottom, drawFooters, drawRunningHeader, drawSheetHeader } from "./page-chrome";
 import { STYLE } from "./page-style";
-import { renderDrillSvg } from "./render-drill-svg";
+import { engravedDrillSvg } from "../jobs/engraving-cache";
 import { svgSize } from "./svg-size";
 
 /** Engraving width in px; at A4's column (≈ 487 pt) a staff is ≈ 7 mm high, a usual print size. */
@@ -39,7 +39,7 @@ export async function renderHandoutPdf(raw: HandoutInput): Promise<Uint8Array> {
   const input = HandoutInputSchema.parse(raw);
   const arts: DrillArt[] = [];
   for (const drill of input.drills) {
-    const svg = await renderDrillSvg(drill.musicxml, { widthPx: ART_WIDTH_PX });
+    const svg = await engravedDrillSvg(drill.musicxml, ART_WIDTH_PX);
     arts.push({ svg, ...svgSize(svg) });
   }
 

@@ -9,6 +9,7 @@ import type { HandProfile } from "../drills/index";
 import type { GenerateRequest } from "./generate-request";
 import { generateForPassage, knotDrillsJson, passageOf, type KnotSource } from "./generate";
 import { Lru } from "../lru";
+import { heavyWork } from "../jobs/gate";
 import { parsedScore, cachedScore } from "./score-cache";
 
 /** What the handler knows about a knot before reading its piece (db/queries/knot-drills getKnotStamp). */
@@ -66,7 +67,8 @@ export async function knotDrillsBody(
   if (hit !== undefined) return hit;
   const running = pending.get(key);
   if (running) return running;
-  const work = (async () => {
+  // Through the bounded queue of heavy work (lib/jobs/gate.ts): QueueFullError when it is full.
+  const work = heavyWork.run(async () => {
     const stamp = { id: knot.scoreId, updatedAt: knot.scoreUpdatedAt };
     let score = cachedScore(stamp);
     if (!score) {
@@ -77,7 +79,7 @@ export async function knotDrillsBody(
     const body = utf8.encode(JSON.stringify(knotDrillsJson(generateForPassage(passageOf(score, knot), req, profile))));
     bodies.set(key, body);
     return body;
-  })();
+  });
   pending.set(key, work);
   try {
     return await work;

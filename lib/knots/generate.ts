@@ -7,6 +7,7 @@ import { drillKeys, toDrillDto, type DrillDto } from "./dto";
 import type { GenerateRequest } from "./generate-request";
 import { barIndex, selectPassage } from "../score/index";
 import type { Passage, Score } from "../score/types";
+import { checkGeneratedOutput, checkKnotLength } from "../limits/work";
 import { parsedScore } from "./score-cache";
 import { writeMusicXML } from "../score/write";
 
@@ -56,9 +57,14 @@ export function generateForKnot(src: KnotSource, req: GenerateRequest, profile?:
   return generateForPassage(knotPassage(src), req, profile);
 }
 
-/** The request run on a passage already cut out of its piece. */
+/**
+ * The request run on a passage already cut out of its piece. Throws WorkLimitError (lib/limits/work)
+ * when the knot is longer than a knot may be or the drills would be more than one request may make.
+ */
 export function generateForPassage(passage: Passage, req: GenerateRequest, profile?: HandProfile): KnotDrills {
+  checkKnotLength(passage.measures.length);
   const result = generateDrills(passage, { families: req.families, options: req.options, profile, seed: req.seed ?? 1 });
+  checkGeneratedOutput(result.drills);
   const keys = drillKeys(result.drills);
   return { drills: result.drills.map((drill, i) => ({ drill, key: keys[i] })), skipped: result.skipped, profile: profile ?? DEFAULT_PROFILE };
 }

@@ -6,6 +6,7 @@
 import { Lru } from "../lru";
 import { readScore } from "../score/index";
 import type { Score } from "../score/types";
+import { checkScoreBounds } from "../score/limits";
 
 const MAX_PIECES = 8;
 const scores = new Lru<string, Score>({ maxEntries: MAX_PIECES });
@@ -22,14 +23,22 @@ export function cachedScore(stamp: ScoreStamp): Score | undefined {
   return scores.get(keyOf(stamp));
 }
 
-/** The piece parsed from its MusicXML, reusing the cached copy when the stamp is known. Throws ScoreError like readScore. */
+/**
+ * The piece parsed from its MusicXML, reusing the cached copy when the stamp is known. Throws ScoreError
+ * like readScore, and when a number in it is out of bounds (a piece stored before the bounds existed).
+ */
 export function parsedScore(musicxml: string, stamp?: ScoreStamp): Score {
-  if (!stamp) return readScore(musicxml).score;
+  if (!stamp) return bounded(readScore(musicxml).score);
   const key = keyOf(stamp);
   const hit = scores.get(key);
   if (hit) return hit;
-  const { score } = readScore(musicxml);
+  const score = bounded(readScore(musicxml).score);
   scores.set(key, score);
+  return score;
+}
+
+function bounded(score: Score): Score {
+  checkScoreBounds(score);
   return score;
 }
 

@@ -55,3 +55,21 @@ describe("playbackEvents", () => {
     expect(tied?.durationQ).toBe(3);
   });
 });
+
+describe("playbackEvents on hostile numbers", () => {
+  // fixtures/hostile/huge-duration.xml (scripts/make-hostile-bounds.ts): four bars at divisions 4,
+  // bar 3 holds one note of 10^15 divisions. Before the bound, playback made one metronome click per
+  // beat of that note (2.5 × 10^14 of them) and the server ran out of memory.
+  test("the 10^15-duration file: one event per note, built in well under a second", async () => {
+    const { boundsCorpus } = await import("../../scripts/make-hostile-bounds");
+    const c = boundsCorpus().find((x) => x.file === "huge-duration.xml")!;
+    const { score } = readScore(c.bytes);
+    const heap = process.memoryUsage().heapUsed;
+    const t0 = performance.now();
+    const p = playbackEvents(score);
+    expect(performance.now() - t0).toBeLessThan(1000);
+    expect(p.events).toHaveLength(score.events.filter((e) => e.pitch).length);
+    expect(p.events[2].durationQ).toBe(1e15 / 4);
+    expect(process.memoryUsage().heapUsed - heap).toBeLessThan(64 * 1024 * 1024);
+  });
+});

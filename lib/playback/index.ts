@@ -71,7 +71,8 @@ export function playbackEvents(score: Score, options: PlaybackOptions = {}): Sco
   const endQ = measures[to] ? measures[to].start.add(measures[to].length).valueOf() : 0;
   const staves = score.parts[0]?.staves ?? 1;
   const staff = options.hand === undefined || staves < 2 ? null : options.hand === "right" ? 1 : 2;
-  const perf = toPerformance(score);
+  // Notes only: the events are bounded by the number of notes in the file, never by a length in it.
+  const perf = toPerformance(score, { clicks: false });
   const events = perf.notes
     .filter((n) => n.startQuarters >= startQ && n.startQuarters < endQ && (staff === null || n.staff === staff))
     .map((n) => ({ midi: n.midi, onsetQ: n.startQuarters, durationQ: n.quarters, velocity: n.velocity, staff: n.staff }));

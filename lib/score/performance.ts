@@ -46,7 +46,12 @@ export interface PerformanceOptions {
   readonly bpm?: number;
   /** Straight eighths only (swing is not supported). */
   readonly swing?: false;
+  /** Metronome clicks too (default true); playback that needs only the notes passes false. */
+  readonly clicks?: boolean;
 }
+
+/** Most clicks ever made for one score, whatever its bars say (lib/score/limits.ts refuses more at upload). */
+export const MAX_CLICKS = 200_000;
 
 /** Tempo without any mark: 120 quarter notes a minute, the Standard MIDI File default (500,000 µs per quarter). */
 export const DEFAULT_BPM = 120;
@@ -81,14 +86,17 @@ export function toPerformance(score: Score, options: PerformanceOptions = {}): P
   const groups = new Map<string, NoteEvent[]>();
   for (const e of score.events) {
     const key = `${e.part}|${e.staff}`;
-    groups.set(key, [...(groups.get(key) ?? []), e]);
+    const group = groups.get(key);
+    if (group) group.push(e);
+    else groups.set(key, [e]);
   }
   for (const events of groups.values()) notes.push(...staffNotes(events, seconds));
   notes.sort((a, b) => a.start - b.start || a.staff - b.staff || a.midi - b.midi);
   const end = score.measures.length > 0 ? score.measures[score.measures.length - 1] : null;
   const endQuarters = end ? end.start.add(end.length).valueOf() : 0;
-  const durationSeconds = Math.max(seconds(endQuarters), ...notes.map((n) => n.start + n.duration));
-  return { notes, bpm: tempos[0].bpm, durationSeconds, beats: clicks(score.measures, seconds), tempos };
+  const durationSeconds = notes.reduce((max, n) => Math.max(max, n.start + n.duration), seconds(endQuarters));
+  const beats = options.clicks === false ? [] : clicks(score.measures, seconds);
+  return { notes, bpm: tempos[0].bpm, durationSeconds, beats, tempos };
 }
 
 function tempoMap(measures: readonly Measure[], override?: number): { quarters: number; bpm: number }[] {
@@ -179,10 +187,19 @@ function note(e: NoteEvent, startQ: number, lengthQ: number, velocity: number, s
 /** Merged note id → ids of every written event its tie chain covers. */
 function tieChains(written: readonly NoteEvent[], merged: readonly NoteEvent[]): Map<string, string[]> {
   const out = new Map<string, string[]>();
+  // Candidates by pitch and voice, so each chain looks only at its own notes.
+  const byKey = new Map<string, NoteEvent[]>();
+  for (const w of written) {
+    if (!w.pitch || w.grace) continue;
+    const k = `${w.pitch.midi}|${w.voice}`;
+    const list = byKey.get(k);
+    if (list) list.push(w);
+    else byKey.set(k, [w]);
+  }
   for (const m of merged) {
     if (!m.pitch || m.grace) continue;
     const end = m.onset.add(m.duration);
-    const members = written.filter(
+    const members = (byKey.get(`${m.pitch.midi}|${m.voice}`) ?? []).filter(
       (w) => w.pitch?.midi === m.pitch!.midi && !w.grace && w.voice === m.voice && w.onset.gte(m.onset) && w.onset.lt(end) && (w.id === m.id || w.tie === "stop" || w.tie === "continue"),
     );
     out.set(m.id, members.map((w) => w.id));
@@ -197,6 +214,7 @@ function clicks(measures: readonly Measure[], seconds: (q: number) => number): C
     const compound = m.time.beatType >= 8 && m.time.beats % 3 === 0 && m.time.beats > 3;
     const beat = new Fraction(compound ? 12 : 4, m.time.beatType);
     for (let t = new Fraction(0); t.lt(m.length); t = t.add(beat)) {
+      if (out.length >= MAX_CLICKS) return out;
       out.push({ time: seconds(m.start.add(t).valueOf()), barStart: t.equals(0), measure: m.index });
     }
   }

@@ -37,10 +37,11 @@ export function pageUrl(worker: string): string {
   return urlFor(route, ids);
 }
 
-/** One action call as a persona; redirects are reported, not followed. */
-export async function callAction(action: ActionEntry, url: string, persona: Persona, args: unknown[]) {
+/** One action call as a persona; redirects are reported, not followed. `origin: null` sends no Origin header. */
+export async function callAction(action: ActionEntry, url: string, persona: Persona, args: unknown[], origin: string | null = baseURL) {
   const body = await encodeReply(args);
-  const headers: Record<string, string> = { "next-action": action.id, origin: baseURL, accept: "text/x-component" };
+  const headers: Record<string, string> = { "next-action": action.id, accept: "text/x-component" };
+  if (origin !== null) headers.origin = origin;
   if (typeof body === "string") headers["content-type"] = "text/plain;charset=UTF-8";
   if (cookies[persona]) headers.cookie = cookies[persona];
   const res = await fetch(new URL(url, baseURL), { method: "POST", headers, body, redirect: "manual" });

@@ -25,6 +25,8 @@ describe("security headers", () => {
     expect(directives.get("script-src")).not.toContain("'unsafe-eval'");
     expect(res.headers.get("x-content-type-options")).toBe("nosniff");
     expect(res.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
+    // No framework fingerprint (OWASP HTTP Headers Cheat Sheet: remove X-Powered-By).
+    expect(res.headers.get("x-powered-by")).toBeNull();
   });
 });
 
@@ -101,24 +103,20 @@ describe("sign-in rate limiting", () => {
     expect(right.status).toBe(429);
   });
 
-  test("changing X-Forwarded-For on every try does not help: the 11th wrong password for one account is 429", async () => {
-    // Addresses from TEST-NET-3 (RFC 5737), a new one per try, so no per-address budget is ever used up.
-    const statuses: number[] = [];
-    for (let i = 0; i < 11; i++) {
+  test("changing X-Forwarded-For on every try does not help: with no TRUSTED_PROXY the limit keys on the socket address", async () => {
+    // The test above used up the loopback address's sign-in budget. Now a different account, and a new
+    // claimed address on every try (TEST-NET-3, RFC 5737): each is still 429 from the per-address
+    // limiter, not the per-account one (this account has no failures yet). better-auth docs, "Rate
+    // Limit → Connecting IP address"; OWASP Authentication Cheat Sheet, "Login Throttling".
+    for (let i = 0; i < 5; i++) {
       const res = await fetch(`${baseURL}/api/auth/sign-in/email`, {
         method: "POST",
-        headers: { "content-type": "application/json", origin: baseURL, "x-forwarded-for": `203.0.113.${i + 1}` },
+        headers: { "content-type": "application/json", origin: baseURL, "x-forwarded-for": `203.0.113.${i + 1}`, "x-real-ip": `203.0.113.${i + 101}` },
         body: JSON.stringify({ email: PERSONA_LOGINS.otherStudent.email, password: `rotating-guess-${i}` }),
       });
-      statuses.push(res.status);
+      const body = await res.text();
+      expect(res.status, body).toBe(429);
+      expect(body).not.toContain("TOO_MANY_FAILED_SIGN_INS");
     }
-    expect(statuses.slice(0, 10)).toEqual(Array(10).fill(401));
-    expect(statuses[10]).toBe(429);
-    const right = await fetch(`${baseURL}/api/auth/sign-in/email`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: baseURL, "x-forwarded-for": "203.0.113.99" },
-      body: JSON.stringify(PERSONA_LOGINS.otherStudent),
-    });
-    expect(right.status).toBe(429);
   });
 });

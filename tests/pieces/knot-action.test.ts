@@ -57,6 +57,8 @@ describe("createKnot", () => {
     ["bars in the wrong order", { from: 4, to: 2, hand: "right", tags: ["evenness"] }, "to"],
     ["an unknown hand", { from: 1, to: 2, hand: "third", tags: ["evenness"] }, "hand"],
     ["a bar past the end", { from: 16, to: 40, hand: "right", tags: ["evenness"] }, "to"],
+    // lib/limits/work.ts: a knot is 1–16 bars; the pickup and bars 1–16 are 17 bars.
+    ["17 bars, one more than a knot may hold", { from: 0, to: 16, hand: "right", tags: ["evenness"] }, "to"],
   ])("%s is refused with a field error and nothing stored", async (_label, input, field) => {
     session.current = a;
     const before = await countRows(env.client, "passage");

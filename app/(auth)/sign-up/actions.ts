@@ -4,10 +4,12 @@ import { redirect } from "next/navigation";
 import { db } from "@/db";
 import { fail, type ActionResult } from "@/lib/action-result";
 import { auth } from "@/lib/auth";
-import { clientKey, createRateLimiter } from "@/lib/auth/rate-limit";
+import { clientKey } from "@/lib/auth/rate-limit";
 import { createTeacherAccount } from "@/lib/auth/teacher-sign-up";
+import { dbRateLimiter } from "@/lib/limits/counter";
 
-const signUpLimiter = createRateLimiter(10, 10 * 60 * 1000);
+// Kept in the database: the limit holds across app servers (lib/limits/counter.ts).
+const signUpLimiter = dbRateLimiter("sign-up", 10, 10 * 60 * 1000);
 
 export type SignUpState = (ActionResult<null> & { values?: Record<string, string> }) | null;
 
@@ -24,7 +26,7 @@ export async function signUpTeacher(_prev: SignUpState, form: FormData): Promise
   };
   const values = { name: raw.name, email: raw.email, studioName: raw.studioName };
   const requestHeaders = await headers();
-  if (!signUpLimiter.take(clientKey(requestHeaders))) {
+  if (!(await signUpLimiter.take(clientKey(requestHeaders)))) {
     return { ...fail("Too many sign-up attempts from here. Please wait a few minutes."), values };
   }
   const created = await createTeacherAccount(db, raw);

@@ -6,6 +6,7 @@ import type { Db } from "@/db";
 import { deleteScore, insertScore } from "@/db/queries/scores";
 import type { FileStore } from "@/lib/storage";
 import { isScoreError, readScore } from "@/lib/score";
+import { checkScoreBounds } from "@/lib/score/limits";
 
 /** The size cap shown on the form and enforced here. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
@@ -92,6 +93,8 @@ export async function acceptUpload(form: FormData, ctx: UploadContext): Promise<
     if (score.measures.length === 0 || score.parts.length === 0) {
       return refuse(422, `"${file.name}" has no bars of music.`);
     }
+    // Durations, onsets, divisions and tuplets within sane bounds (throws a ScoreError naming the bar).
+    checkScoreBounds(score);
     summary = {
       title: score.meta.title.trim() || titleFromName(file.name),
       composer: score.meta.composer.trim() || null,

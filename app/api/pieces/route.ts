@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { revalidatePath } from "next/cache";
 import { db } from "@/db";
 import { listScoresWithKnots } from "@/db/queries/scores";
+import { BodyTooLargeError, readFormCapped } from "@/lib/limits/body";
 import { acceptUpload, MAX_UPLOAD_BYTES } from "./piece-upload";
 import { teacherContext } from "./teacher-context";
 
@@ -19,18 +20,16 @@ export async function GET() {
 export async function POST(request: Request) {
   const auth = await teacherContext();
   if (auth instanceof NextResponse) return auth;
-  const declared = Number(request.headers.get("content-length") ?? 0);
-  if (declared > MAX_UPLOAD_BYTES + 64 * 1024) {
-    return NextResponse.json({ error: "The file is larger than 5 MB.", field: "file" }, { status: 413 });
-  }
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("multipart/form-data")) {
     return NextResponse.json({ error: "Send the piece as a form upload (multipart/form-data).", field: "file" }, { status: 415 });
   }
   let form: FormData;
   try {
-    form = await request.formData();
-  } catch {
+    // Read at most the cap (plus room for the form's own parts), chunked bodies included.
+    form = await readFormCapped(request, MAX_UPLOAD_BYTES + 64 * 1024);
+  } catch (err) {
+    if (err instanceof BodyTooLargeError) return NextResponse.json({ error: "The file is larger than 5 MB.", field: "file" }, { status: 413 });
     return NextResponse.json({ error: "The upload was cut off or malformed; please try again.", field: "file" }, { status: 400 });
   }
   const outcome = await acceptUpload(form, auth.upload);

@@ -7,6 +7,7 @@ import { insertPassage } from "@/db/queries/passages";
 import { getScore } from "@/db/queries/scores";
 import { fail, fromZodError, ok, type ActionResult } from "@/lib/action-result";
 import { PROBLEM_TAGS } from "@/lib/drills";
+import { knotLengthProblem } from "@/lib/limits/work";
 import { readScore } from "@/lib/score";
 import { requireTeacher } from "@/lib/auth/session";
 import { printedBar } from "./piece-data";
@@ -36,6 +37,8 @@ export async function createKnot(scoreId: string, raw: KnotInput): Promise<Actio
   const from = score.measures[input.from];
   const to = score.measures[input.to];
   if (!from || !to) return fail("Those bars are not in this piece.", { to: ["Select bars inside the piece."] });
+  const tooLong = knotLengthProblem(input.to - input.from + 1);
+  if (tooLong) return fail(tooLong, { to: [tooLong] });
   const id = await insertPassage(db, {
     studioId: ctx.studioId,
     scoreId: row.id,

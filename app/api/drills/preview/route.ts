@@ -2,6 +2,8 @@ import { apiTeacher, jsonError, notFoundResponse } from "@/lib/auth/api-session"
 import { DRILL_FORMATS, downloadResponse, drillFile, type DrillFormat } from "@/lib/knots/files";
 import { GenerateRequest, requestProblems } from "@/lib/knots/generate-request";
 import { drillsForStudioKnot } from "@/lib/knots/request";
+import { isWorkLimitError } from "@/lib/limits/work";
+import { busyResponse, heavyWork, QueueFullError } from "@/lib/jobs/gate";
 import { writeMusicXML } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -23,7 +25,14 @@ export async function GET(request: Request) {
   }
   const parsed = GenerateRequest.safeParse(raw);
   if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
-  const out = await drillsForStudioKnot(ctx.studioId, knotId, parsed.data);
+  let out;
+  try {
+    out = await heavyWork.run(() => drillsForStudioKnot(ctx.studioId, knotId, parsed.data));
+  } catch (err) {
+    if (err instanceof QueueFullError) return busyResponse(err);
+    if (isWorkLimitError(err)) return jsonError(422, err.message);
+    throw err;
+  }
   const found = out?.drills.find((d) => d.key === key);
   if (!found) return notFoundResponse();
   return downloadResponse(drillFile(writeMusicXML(found.drill.score), found.drill.title, format));

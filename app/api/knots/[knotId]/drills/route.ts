@@ -3,6 +3,9 @@ import { getHandProfile, getKnotStamp, getScoreMusicXml } from "@/db/queries/kno
 import { apiTeacher, jsonError, notFoundResponse } from "@/lib/auth/api-session";
 import { GenerateRequest, requestProblems } from "@/lib/knots/generate-request";
 import { knotDrillsBody } from "@/lib/knots/cache";
+import { readJsonCapped } from "@/lib/limits/body";
+import { isWorkLimitError } from "@/lib/limits/work";
+import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
 import { isScoreError } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -16,7 +19,12 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
   const ctx = await apiTeacher();
   if (ctx instanceof Response) return ctx;
   const { knotId } = await params;
-  const body = await request.json().catch(() => undefined);
+  let body: unknown;
+  try {
+    body = await readJsonCapped(request);
+  } catch {
+    return jsonError(413, "The drill request is too large.");
+  }
   const parsed = GenerateRequest.safeParse(body);
   if (!parsed.success) return jsonError(400, "The drill request is not valid.", requestProblems(parsed.error));
   const req = parsed.data;
@@ -31,6 +39,8 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
     return new Response(json, { headers: { "content-type": "application/json", "content-length": String(json.byteLength) } });
   } catch (err) {
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
+    if (isWorkLimitError(err)) return jsonError(422, err.message);
+    if (err instanceof QueueFullError) return busyResponse(err);
     throw err;
   }
 }

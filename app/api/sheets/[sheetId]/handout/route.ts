@@ -1,7 +1,9 @@
 import { db } from "@/db";
 import { apiMember, jsonError, notFoundResponse } from "@/lib/auth/api-session";
-import { PAPER_SIZES, renderHandoutPdf, type Paper } from "@/lib/handout";
+import { PAPER_SIZES, type Paper } from "@/lib/handout";
 import { canReadSheet } from "@/lib/sheets/access";
+import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
+import { handoutPdf } from "@/lib/jobs/render-cache";
 import { handoutFileName, loadHandoutInput } from "./handout-data";
 
 export const dynamic = "force-dynamic";
@@ -23,7 +25,14 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
   const paper = asked as Paper;
   const input = await loadHandoutInput(db, ctx, sheetId, paper, url.searchParams.get("assignment"));
   if (!input) return notFoundResponse();
-  const pdf = await renderHandoutPdf(input);
+  // Kept by content: the same sheet, paper, names and goals are rendered once (lib/jobs/render-cache.ts).
+  let pdf: Uint8Array;
+  try {
+    pdf = await handoutPdf(input);
+  } catch (err) {
+    if (err instanceof QueueFullError) return busyResponse(err);
+    throw err;
+  }
   const download = url.searchParams.get("download") === "1";
   return new Response(Buffer.from(pdf), {
     headers: {
