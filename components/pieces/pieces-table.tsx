@@ -4,7 +4,6 @@ import { useEffect, useMemo, useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getSortedRowModel,
@@ -12,10 +11,24 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { QueryProvider } from "../providers";
+import { SortableHead, TableRows, type TableLook } from "../ui/sortable-table";
 import { DeletePieceDialog } from "./delete-piece-dialog";
 import { fetchPieces, formatUploaded, pieceKeys, type PieceListRow } from "./piece-keys";
 
 const col = createColumnHelper<PieceListRow>();
+
+const LOOK: TableLook = {
+  th: "px-4 py-2.5 font-bold text-walnut",
+  button: "inline-flex items-center gap-1 rounded hover:underline",
+  tr: "hover:bg-paper/60",
+  td: "px-4 py-2.5 align-middle",
+  sortLabel: (label, sorted) => (
+    <>
+      {label}
+      <span aria-hidden="true" className="text-xs text-muted">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+    </>
+  ),
+};
 
 /**
  * The studio's pieces: sortable columns, a filter box, and delete with confirmation. Loaded lazily
@@ -95,35 +108,9 @@ function InteractivePiecesTable({ initial }: { initial: PieceListRow[] }) {
       {isError ? <p role="alert" className="text-sm text-madder">The list could not be refreshed.</p> : null}
       <div className="relative overflow-x-auto rounded-2xl border border-line bg-card">
         <table className="w-full min-w-[36rem] text-left text-sm" aria-label="Pieces">
-          <thead className="border-b border-line bg-paper">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className="px-4 py-2.5 font-bold text-walnut" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 rounded hover:underline">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true" className="text-xs text-muted">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableHead table={table} look={LOOK} />
           <tbody className="divide-y divide-line">
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="hover:bg-paper/60">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-4 py-2.5 align-middle">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                ))}
-              </tr>
-            ))}
+            <TableRows table={table} look={LOOK} />
             {table.getRowModel().rows.length === 0 ? (
               <tr>
                 <td colSpan={columns.length} className="px-4 py-6 text-center text-muted">
