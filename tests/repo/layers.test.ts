@@ -28,9 +28,6 @@ const RANK: Record<Layer, number> = { app: 4, components: 3, service: 2, db: 1, 
 /** Packages a pure core must not reach for: the app's framework, database and auth. */
 const APP_PACKAGES = /^(react|react-dom|next|drizzle-orm|@libsql\/client|better-auth|server-only|nodemailer|uploadthing|@uploadthing\/react)(\/|$)/;
 
-// The one circle left in lib/drills (fingering-rules → hand → types → span → fingering): broken on
-// the finger branch; the lead removes this exception when both branches meet.
-const KNOWN_CIRCLES = [["lib/drills/fingering-rules.ts", "lib/drills/fingering.ts", "lib/drills/hand.ts", "lib/drills/span.ts", "lib/drills/types.ts"]];
 
 describe("the import scanner", () => {
   test("finds a two-file circle and a self-import, and nothing in a chain", () => {
@@ -51,9 +48,8 @@ describe("the import scanner", () => {
 });
 
 describe("layers", () => {
-  test("no import circles in app, components, db and lib (one known lib/drills circle aside)", () => {
-    const known = new Set(KNOWN_CIRCLES.map((c) => c.join(" ")));
-    expect(importCircles(graph).filter((c) => !known.has(c.join(" ")))).toEqual([]);
+  test("no import circles in app, components, db and lib", () => {
+    expect(importCircles(graph)).toEqual([]);
   });
 
   test("every import points to the same layer or one below it", () => {
