@@ -13,17 +13,26 @@
  * - Rests: the published model scores legato fragments. Across a rest the hand lifts, so the pair and
  *   trio rules are not charged there; a flat lift charge (plus points per semitone beyond an octave)
  *   replaces them, and the same finger may take the next key.
- * - Thumb reach: in arpeggios the thumb passes under a fourth or more; the tuning widens the span
- *   table's thumb-under limits by a few semitones.
- * - Scale runs: when the key is known (`keyOf`), a run of five or more notes by step in one direction
- *   gets the scale book's finger (scale-fingerings.ts) as a prior — a cost for any other finger — so
- *   flat-key runs keep the thumb off the black keys as the books do.
- * - Tied and held notes keep the finger that struck them; a note struck while another of the same hand
- *   is held cannot take the held note's finger (chord states exclude duplicates; held notes are in the
- *   line scoring through `sameFinger`).
- * The rule weights and extension sizes were fitted on the printed fingerings of the corpus
- * (fingering-tuning.ts, cross-validated by file); `tuning: PUBLISHED_TUNING` gives the published model
- * unchanged. Costs reported per note and bar are always the published, unweighted rule points.
+ * - Thumb reach: in arpeggios the thumb passes under finger 3 by a fourth (1-2-3-1); the span table's
+ *   limits for the thumb under 3 (or 3 over the thumb) are widened by a few semitones.
+ * - Scale runs: a run of five or more notes by step in one direction gets the scale book's finger
+ *   (scale-fingerings.ts) as a prior — a cost for any other finger — from the key in force when it is
+ *   known (`keyOf`), else only where every scale holding the run's notes agrees; so flat-key runs keep the
+ *   thumb off the black keys as the books do.
+ * - Repeated figures: a note whose neighbours (two on each side) equal those of a note with a printed
+ *   finger elsewhere gets that finger as a prior (fingering-priors.ts `repeatPriors`).
+ * - Held notes: tied notes keep the finger that struck them; after the search, a note struck while
+ *   another note of the hand is held (within an octave — further off, the pedal holds it) is moved off
+ *   the held note's finger when its slice has any other state (`releaseHeldFingers`). The estimator does
+ *   not propose finger substitutions itself; a printed substitution ("3-1") is a fixed point on its
+ *   first finger.
+ * - Grace notes and ornaments are slices of their own just before the note they ornament.
+ * - Voices that cross staves are played by their home staff's hand (difficulty-bars.ts `voiceHomes`).
+ * A data-driven layer (re-weighting the rules on the corpus's printed fingerings) was tried and
+ * overfitted under cross-validation by file, so the published weights stay; fingering-tuning.ts gives
+ * the extension sizes, how they were chosen and the agreement figures (leave-one-out 81.1%, all marks
+ * hidden 63.7%, in-sample; published model 70.6% and 57.7%). `tuning: PUBLISHED_TUNING` gives the
+ * published model unchanged. Costs reported per note and bar are always the published, unweighted points.
  */
 import type { Hand, KeySignature, NoteEvent } from "../score/types";
 import { buildSlices, type Slice } from "./fingering-slices";
