@@ -6,8 +6,8 @@
  * rule weighs 1, no extension is on. `FITTED_TUNING` is what the estimator uses. Its rule weights stay
  * at 1: a data-driven layer that re-weighted the twelve rules on the printed fingerings of the corpus
  * (the four `fingered-*` scores of fixtures/reference/scores, 201 printed fingers) overfitted — fitted
- * by coordinate search on three files and scored on the fourth, it agreed on 53.8% of the held-out marks,
- * below the published model's 57.3% (scripts/fit-fingering.ts --weights). The extension sizes below were
+ * by coordinate search on three files and scored on the fourth, it agreed on 56.2% of the held-out marks,
+ * below the published model's 57.7% (scripts/fit-fingering.ts --weights). The extension sizes below were
  * chosen by hand from the musical reason for each (noted beside it) and checked on the same corpus, so
  * the corpus figures are in-sample: leave-one-out 163/201 (81.1%), all marks hidden 128/201 (63.7%),
  * against 142/201 and 116/201 for the published model. As a check of stability, a coordinate search
