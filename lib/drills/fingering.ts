@@ -37,16 +37,15 @@
 import type { Hand, KeySignature, NoteEvent } from "../score/types";
 import { buildSlices, type Slice } from "./fingering-slices";
 import {
-  chordPracticalPenalty,
   clearCosts,
   emptyCosts,
-  noteCosts,
   pairCosts,
   totalCost,
   trioCosts,
   type FingeringModel,
   type RuleCosts,
 } from "./fingering-rules";
+import { addScaled, linkCosts, sliceCosts, trioLinkCosts } from "./fingering-costs";
 import { repeatPriors, scalePriors } from "./fingering-priors";
 import { FITTED_TUNING, weightedCost, type FingeringTuning } from "./fingering-tuning";
 
@@ -74,61 +73,6 @@ export interface FingeringResult {
   readonly costPerBar: Map<number, number>;
   /** Points per rule per measure, for explaining what makes a bar hard. */
   readonly rulesPerBar: Map<number, RuleCosts>;
-}
-
-/** Line notes of a slice: the lowest (0) and the highest (1) kept pitch. */
-const lineIndex = (s: Slice, line: 0 | 1): number => (line === 0 ? 0 : s.midis.length - 1);
-
-const chordScratch = emptyCosts();
-
-/** Rules on one slice alone: note rules with neighbour colours, and spans inside a chord. */
-function sliceCosts(slices: readonly Slice[], s: number, state: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const cur = slices[s]!;
-  const prev = slices[s - 1];
-  const next = slices[s + 1];
-  for (let j = 0; j < cur.midis.length; j++) {
-    const line: 0 | 1 = j === 0 ? 0 : 1;
-    const p = prev ? prev.midis[lineIndex(prev, line)]! : null;
-    const n = next ? next.midis[lineIndex(next, line)]! : null;
-    noteCosts(cur.midis[j]!, state[j]!, p, n, model, into);
-  }
-  for (let j = 0; j + 1 < cur.midis.length; j++) {
-    const chord = clearCosts(chordScratch);
-    pairCosts(cur.midis[j]!, state[j]!, cur.midis[j + 1]!, state[j + 1]!, hand, model, chord);
-    into.stretch += chord.stretch;
-    into.smallSpan += chord.smallSpan;
-    into.largeSpan += chord.largeSpan;
-    into.overPractical += chordPracticalPenalty(cur.midis[j]!, state[j]!, cur.midis[j + 1]!, state[j + 1]!, hand, model);
-  }
-}
-
-/** Pair rules from slice s to s+1 along the low and high lines (averaged when they differ). */
-function linkCosts(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const single = a.midis.length === 1 && b.midis.length === 1;
-  const weight = single ? 1 : 0.5;
-  const lines: (0 | 1)[] = single ? [0] : [0, 1];
-  for (const line of lines) {
-    const i = lineIndex(a, line);
-    const j = lineIndex(b, line);
-    addScaled(into, pairCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, hand, model), weight);
-  }
-}
-
-/** Trio rules over slices s-1, s, s+1 along the low and high lines. */
-function trioLinkCosts(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], c: Slice, fc: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const single = a.midis.length === 1 && b.midis.length === 1 && c.midis.length === 1;
-  const weight = single ? 1 : 0.5;
-  const lines: (0 | 1)[] = single ? [0] : [0, 1];
-  for (const line of lines) {
-    const i = lineIndex(a, line);
-    const j = lineIndex(b, line);
-    const k = lineIndex(c, line);
-    addScaled(into, trioCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, c.midis[k]!, fc[k]!, hand, model), weight);
-  }
-}
-
-function addScaled(into: RuleCosts, add: RuleCosts, w: number): void {
-  for (const key of Object.keys(add) as (keyof RuleCosts)[]) into[key] += add[key] * w;
 }
 
 /** What the search weighs: the tuning plus the model, hand and per-slice priors. */
@@ -289,7 +233,7 @@ function releaseHeldFingers(slices: readonly Slice[], path: number[], sc: Scorer
  * Whether the hand itself can hold a note: every note struck while it sounds lies within an octave of
  * it (common practice: a note held under a melody that moves further away is held by the pedal).
  */
-export function holdable(slices: readonly Slice[], from: number, midi: number, end: number): boolean {
+function holdable(slices: readonly Slice[], from: number, midi: number, end: number): boolean {
   for (let s = from + 1; s < slices.length && slices[s]!.onset < end - 1e-9; s++) {
     if (slices[s]!.grace) continue;
     for (const m of slices[s]!.midis) if (Math.abs(m - midi) > HOLD_REACH) return false;
@@ -298,7 +242,7 @@ export function holdable(slices: readonly Slice[], from: number, midi: number, e
 }
 
 /** Farthest interval (semitones) from a held note to notes struck under it for the hand to hold it. */
-export const HOLD_REACH = 12;
+const HOLD_REACH = 12;
 
 /** The written finger tuple of a slice when every key of it is fingered in the score, else null. */
 function writtenState(slice: Slice, written: readonly (number | null)[]): number[] | null {
