@@ -124,7 +124,7 @@ describe("fingering carried from the passage", () => {
     const p = makePassage({ right: "E4/8 F4/8 G4/8 A4/8 B4/8 C5/8 D5/8 E5/8" });
     const slots = p.sonorities.right.map((s) => sonoritySlot(s));
     const d = buildDrill(p, { ...spec, segments: [{ right: slots }, { right: slots }] }, makeContext());
-    const own = estimateFingering(p.events, "right").fingers;
+    const own = estimateFingering(p.events, "right", { keyOf: () => p.key }).fingers; // the passage estimate knows its key
     const drillFingers = d.score.events.filter((e) => e.pitch).map((e) => e.fingering?.[0]?.finger);
     expect(drillFingers).toEqual([...own, ...own]);
   });

@@ -2,7 +2,7 @@
  * Per-bar facts for one hand of one part: rule points, the widest stretch and the counts behind the
  * plain-word reasons of the difficulty map.
  */
-import type { Hand, NoteEvent, Pitch, Score } from "../score/types";
+import type { Hand, KeySignature, NoteEvent, Pitch, Score } from "../score/types";
 import { estimateFingering } from "./fingering";
 import type { FingeringModel, RuleCosts } from "./fingering-rules";
 import { keyDistanceMm } from "./hand";
@@ -77,10 +77,10 @@ export function handsOf(score: Score): Map<string, Record<Hand, NoteEvent[]>> {
  * stretch (notes struck together, and consecutive notes on different fingers without a crossing).
  *
  * @example
- * barFacts(events, "right", 4, 165.1, "parncutt")[0].cost
+ * barFacts(events, "right", 4, 165.1, "parncutt", (m) => score.measures[m]?.key)[0].cost
  */
-export function barFacts(events: readonly NoteEvent[], hand: Hand, bars: number, octaveMm: number, model: FingeringModel): BarFacts[] {
-  const { fingers, costPerBar, rulesPerBar } = estimateFingering(events, hand, { model });
+export function barFacts(events: readonly NoteEvent[], hand: Hand, bars: number, octaveMm: number, model: FingeringModel, keyOf?: (measure: number) => KeySignature | undefined): BarFacts[] {
+  const { fingers, costPerBar, rulesPerBar } = estimateFingering(events, hand, { model, ...(keyOf ? { keyOf } : {}) });
   type Mutable = { -readonly [K in keyof BarFacts]: BarFacts[K] };
   const facts: Mutable[] = Array.from({ length: bars }, (_, i) => ({
     cost: costPerBar.get(i) ?? 0, rules: rulesPerBar.get(i) ?? null, notes: 0, span: null, weakRepeats: 0,

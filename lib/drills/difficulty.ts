@@ -46,7 +46,7 @@ function analyse(score: Score, options: DifficultyOptions): Analysis {
   const out: Analysis = { right: [], left: [] };
   for (const hands of handsOf(score).values()) {
     for (const hand of ["right", "left"] as const) {
-      if (hands[hand].length > 0) out[hand].push(barFacts(hands[hand], hand, bars, profile.octaveMm, model));
+      if (hands[hand].length > 0) out[hand].push(barFacts(hands[hand], hand, bars, profile.octaveMm, model, (m) => score.measures[m]?.key));
     }
   }
   return out;

@@ -8,7 +8,12 @@ import type { Slice } from "./fingering-slices";
 import { fingeredScale, type ScaleForm } from "./scale-fingerings";
 import { keyTonic } from "./spell";
 
-/** Shortest scale-wise run that gets the prior: five notes (a five-finger group) — common practice. */
+/**
+ * Shortest scale-wise run that gets the prior: five notes (a five-finger group) — common practice.
+ *
+ * @example
+ * MIN_RUN // 5
+ */
 export const MIN_RUN = 5;
 
 type FingerByChroma = ReadonlyMap<number, number>;
@@ -125,7 +130,12 @@ function applyRun(slices: readonly Slice[], a: number, b: number, dir: number, h
   agreed.forEach((f, k) => { if (f != null) out[a + k] = f; });
 }
 
-/** Notes on either side that must match for two statements of a figure to count as the same. */
+/**
+ * Notes on either side that must match for two statements of a figure to count as the same.
+ *
+ * @example
+ * FIGURE_CONTEXT // 2
+ */
 export const FIGURE_CONTEXT = 2;
 
 /**

@@ -4,7 +4,9 @@
  * Source: common practice — the fingerings printed alike in the usual scale-and-arpeggio manuals and
  * piano methods (from memory; no single book is quoted). Only entries whose fingering is the same in
  * all of them are listed (e.g. the flat-key scales, whose starting finger differs between books, are
- * left out). Minor scales are harmonic minor. Arpeggios are root position, one octave.
+ * left out). Minor scales are harmonic minor. Arpeggios are root position, one octave. This short table
+ * checks the estimator on its own; the full scale table of all 24 keys, both hands, one or two octaves,
+ * is scale-fingerings.ts.
  */
 import type { Hand } from "../score/types";
 

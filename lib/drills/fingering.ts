@@ -13,31 +13,39 @@
  * - Rests: the published model scores legato fragments. Across a rest the hand lifts, so the pair and
  *   trio rules are not charged there; a flat lift charge (plus points per semitone beyond an octave)
  *   replaces them, and the same finger may take the next key.
- * - Thumb reach: in arpeggios the thumb passes under a fourth or more; the tuning widens the span
- *   table's thumb-under limits by a few semitones.
- * - Scale runs: when the key is known (`keyOf`), a run of five or more notes by step in one direction
- *   gets the scale book's finger (scale-fingerings.ts) as a prior — a cost for any other finger — so
- *   flat-key runs keep the thumb off the black keys as the books do.
- * - Tied and held notes keep the finger that struck them; a note struck while another of the same hand
- *   is held cannot take the held note's finger (chord states exclude duplicates; held notes are in the
- *   line scoring through `sameFinger`).
- * The rule weights and extension sizes were fitted on the printed fingerings of the corpus
- * (fingering-tuning.ts, cross-validated by file); `tuning: PUBLISHED_TUNING` gives the published model
- * unchanged. Costs reported per note and bar are always the published, unweighted rule points.
+ * - Thumb reach: in arpeggios the thumb passes under finger 3 by a fourth (1-2-3-1); the span table's
+ *   limits for the thumb under 3 (or 3 over the thumb) are widened by a few semitones.
+ * - Scale runs: a run of five or more notes by step in one direction gets the scale book's finger
+ *   (scale-fingerings.ts) as a prior — a cost for any other finger — from the key in force when it is
+ *   known (`keyOf`), else only where every scale holding the run's notes agrees; so flat-key runs keep the
+ *   thumb off the black keys as the books do.
+ * - Repeated figures: a note whose neighbours (two on each side) equal those of a note with a printed
+ *   finger elsewhere gets that finger as a prior (fingering-priors.ts `repeatPriors`).
+ * - Held notes: tied notes keep the finger that struck them; after the search, a note struck while
+ *   another note of the hand is held (within an octave — further off, the pedal holds it) is moved off
+ *   the held note's finger when its slice has any other state (`releaseHeldFingers`). The estimator does
+ *   not propose finger substitutions itself; a printed substitution ("3-1") is a fixed point on its
+ *   first finger.
+ * - Grace notes and ornaments are slices of their own just before the note they ornament.
+ * - Voices that cross staves are played by their home staff's hand (difficulty-bars.ts `voiceHomes`).
+ * A data-driven layer (re-weighting the rules on the corpus's printed fingerings) was tried and
+ * overfitted under cross-validation by file, so the published weights stay; fingering-tuning.ts gives
+ * the extension sizes, how they were chosen and the agreement figures (leave-one-out 81.1%, all marks
+ * hidden 63.7%, in-sample; published model 70.6% and 57.7%). `tuning: PUBLISHED_TUNING` gives the
+ * published model unchanged. Costs reported per note and bar are always the published, unweighted points.
  */
 import type { Hand, KeySignature, NoteEvent } from "../score/types";
 import { buildSlices, type Slice } from "./fingering-slices";
 import {
-  chordPracticalPenalty,
   clearCosts,
   emptyCosts,
-  noteCosts,
   pairCosts,
   totalCost,
   trioCosts,
   type FingeringModel,
   type RuleCosts,
 } from "./fingering-rules";
+import { addScaled, linkCosts, sliceCosts, trioLinkCosts } from "./fingering-costs";
 import { repeatPriors, scalePriors } from "./fingering-priors";
 import { FITTED_TUNING, weightedCost, type FingeringTuning } from "./fingering-tuning";
 
@@ -65,61 +73,6 @@ export interface FingeringResult {
   readonly costPerBar: Map<number, number>;
   /** Points per rule per measure, for explaining what makes a bar hard. */
   readonly rulesPerBar: Map<number, RuleCosts>;
-}
-
-/** Line notes of a slice: the lowest (0) and the highest (1) kept pitch. */
-const lineIndex = (s: Slice, line: 0 | 1): number => (line === 0 ? 0 : s.midis.length - 1);
-
-const chordScratch = emptyCosts();
-
-/** Rules on one slice alone: note rules with neighbour colours, and spans inside a chord. */
-function sliceCosts(slices: readonly Slice[], s: number, state: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const cur = slices[s]!;
-  const prev = slices[s - 1];
-  const next = slices[s + 1];
-  for (let j = 0; j < cur.midis.length; j++) {
-    const line: 0 | 1 = j === 0 ? 0 : 1;
-    const p = prev ? prev.midis[lineIndex(prev, line)]! : null;
-    const n = next ? next.midis[lineIndex(next, line)]! : null;
-    noteCosts(cur.midis[j]!, state[j]!, p, n, model, into);
-  }
-  for (let j = 0; j + 1 < cur.midis.length; j++) {
-    const chord = clearCosts(chordScratch);
-    pairCosts(cur.midis[j]!, state[j]!, cur.midis[j + 1]!, state[j + 1]!, hand, model, chord);
-    into.stretch += chord.stretch;
-    into.smallSpan += chord.smallSpan;
-    into.largeSpan += chord.largeSpan;
-    into.overPractical += chordPracticalPenalty(cur.midis[j]!, state[j]!, cur.midis[j + 1]!, state[j + 1]!, hand, model);
-  }
-}
-
-/** Pair rules from slice s to s+1 along the low and high lines (averaged when they differ). */
-function linkCosts(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const single = a.midis.length === 1 && b.midis.length === 1;
-  const weight = single ? 1 : 0.5;
-  const lines: (0 | 1)[] = single ? [0] : [0, 1];
-  for (const line of lines) {
-    const i = lineIndex(a, line);
-    const j = lineIndex(b, line);
-    addScaled(into, pairCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, hand, model), weight);
-  }
-}
-
-/** Trio rules over slices s-1, s, s+1 along the low and high lines. */
-function trioLinkCosts(a: Slice, fa: readonly number[], b: Slice, fb: readonly number[], c: Slice, fc: readonly number[], hand: Hand, model: FingeringModel, into: RuleCosts): void {
-  const single = a.midis.length === 1 && b.midis.length === 1 && c.midis.length === 1;
-  const weight = single ? 1 : 0.5;
-  const lines: (0 | 1)[] = single ? [0] : [0, 1];
-  for (const line of lines) {
-    const i = lineIndex(a, line);
-    const j = lineIndex(b, line);
-    const k = lineIndex(c, line);
-    addScaled(into, trioCosts(a.midis[i]!, fa[i]!, b.midis[j]!, fb[j]!, c.midis[k]!, fc[k]!, hand, model), weight);
-  }
-}
-
-function addScaled(into: RuleCosts, add: RuleCosts, w: number): void {
-  for (const key of Object.keys(add) as (keyof RuleCosts)[]) into[key] += add[key] * w;
 }
 
 /** What the search weighs: the tuning plus the model, hand and per-slice priors. */
@@ -280,7 +233,7 @@ function releaseHeldFingers(slices: readonly Slice[], path: number[], sc: Scorer
  * Whether the hand itself can hold a note: every note struck while it sounds lies within an octave of
  * it (common practice: a note held under a melody that moves further away is held by the pedal).
  */
-export function holdable(slices: readonly Slice[], from: number, midi: number, end: number): boolean {
+function holdable(slices: readonly Slice[], from: number, midi: number, end: number): boolean {
   for (let s = from + 1; s < slices.length && slices[s]!.onset < end - 1e-9; s++) {
     if (slices[s]!.grace) continue;
     for (const m of slices[s]!.midis) if (Math.abs(m - midi) > HOLD_REACH) return false;
@@ -289,7 +242,7 @@ export function holdable(slices: readonly Slice[], from: number, midi: number, e
 }
 
 /** Farthest interval (semitones) from a held note to notes struck under it for the hand to hold it. */
-export const HOLD_REACH = 12;
+const HOLD_REACH = 12;
 
 /** The written finger tuple of a slice when every key of it is fingered in the score, else null. */
 function writtenState(slice: Slice, written: readonly (number | null)[]): number[] | null {

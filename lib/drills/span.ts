@@ -79,7 +79,7 @@ export function passageFingers(passage: Passage, hand: Hand, memo: FingeringMemo
   let found = byHand.get(hand);
   if (!found) {
     const events = passage.events.filter((e) => e.staff === passage.staffOf[hand]);
-    const { fingers } = estimateFingering(events, hand, { costs: false });
+    const { fingers } = estimateFingering(events, hand, { costs: false, keyOf: () => passage.key });
     const map = new Map<string, number>();
     events.forEach((e, i) => { if (fingers[i] != null) map.set(e.id, fingers[i]!); });
     byHand.set(hand, (found = map));
@@ -143,7 +143,7 @@ export function estimatedFingers(events: readonly NoteEvent[], handOf: (i: numbe
     const key = carry ? sequenceKey(hand, handEvents, hints) : "";
     let fingers = carry ? carry.memo.sequences.get(key) : undefined;
     if (!fingers) {
-      fingers = estimateFingering(handEvents, hand, { hints, costs: false }).fingers;
+      fingers = estimateFingering(handEvents, hand, { hints, costs: false, ...(carry ? { keyOf: () => carry.passage.key } : {}) }).fingers;
       if (carry) carry.memo.sequences.set(key, fingers);
     }
     idx.forEach((i, k) => {
