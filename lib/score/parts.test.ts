@@ -4,6 +4,7 @@ import { describe, expect, test } from "vitest";
 import { handsOfPart, pianoCandidates, pianoPart } from "./parts";
 import { selectPassage } from "./passage";
 import { readScore } from "./read";
+import { writeMusicXML } from "./write";
 
 const scores = path.resolve(__dirname, "../../fixtures/reference/scores");
 
@@ -46,5 +47,20 @@ ${note("C", 3, 5, 2)}${note("D", 3, 5, 2)}${note("E", 3, 5, 2)}${note("G", 4, 5,
     expect(handOf(g4)).toBe("left");
     const left = selectPassage(score, { hand: "left", from: 0, to: 0 });
     expect(left.events.map((e) => e.pitch!.midi).sort()).toEqual([48, 50, 52, 67]);
+  });
+});
+
+describe("each part keeps its own clefs", () => {
+  test("a song's piano part is written with its own clefs, not the voice's", () => {
+    // fixtures/reference/scores/varied-01 (Holmès, Journée fleurie), read from the file: the piano's first
+    // <attributes> gives staff 1 a G clef, then an F clef on line 4 (after-barline), and staff 2 an F clef
+    // on line 4; the voice part has a G clef.
+    const { score } = readScore(new Uint8Array(fs.readFileSync(path.join(scores, "varied-01_holmes_journee-fleurie.mxl"))));
+    const piano = pianoPart(score)!;
+    const knot = selectPassage(score, { hand: "right", from: 0, to: 1 });
+    expect(knot.measures[0].clefs.map((c) => [c.staff, c.sign, c.line])).toEqual([[1, "F", 4], [2, "F", 4]]);
+    const xml = writeMusicXML({ ...score, parts: [piano], events: score.events.filter((e) => e.part === piano.id) });
+    const first = xml.slice(xml.indexOf("<measure"), xml.indexOf("</attributes>"));
+    expect(first).toContain('<clef number="1"><sign>F</sign><line>4</line></clef>');
   });
 });

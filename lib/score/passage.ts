@@ -5,6 +5,7 @@
 import { ScoreError } from "./errors";
 import { beatGroups, figureGroups, sonorities } from "./passage-groups";
 import { handsOfPart, pianoPart } from "./parts";
+import { partMeasure } from "./part-measure";
 import type { Hand, NoteEvent, NoteGroup, Passage, Score } from "./types";
 
 export { beatGroups, beatLength, figureGroups, sonorities } from "./passage-groups";
@@ -41,7 +42,7 @@ export function selectPassage(score: Score, request: PassageRequest): Passage {
   const handEvents = (h: Hand): NoteEvent[] =>
     oneStaff ? (h === "right" || hand === "left" ? inBars : []) : inBars.filter((e) => handOf!(e) === h);
   const events = hand === "both" ? inBars : handEvents(hand);
-  const measures = score.measures.slice(from, to + 1);
+  const measures = score.measures.slice(from, to + 1).map((m) => partMeasure(m, part.id));
   const build = (h: Hand) => {
     if (hand !== "both" && hand !== h) return { sons: [], groups: [] as NoteGroup[] };
     const sons = sonorities(handEvents(h), h);
