@@ -8,6 +8,8 @@ export interface KnotDraft {
   from: number;
   to: number;
   hand: "right" | "left" | "both";
+  /** The part the knot is on, when the teacher picked one of several that could be the piano. */
+  part?: string;
 }
 
 /** Problem tags and a note for the selected bars; saves through the given server action. */

@@ -34,6 +34,19 @@ export function PieceWorkspace({
   const [selection, setSelection] = useState<BarSelection | null>(null);
   const [showHeat, setShowHeat] = useState(false);
   const [cursor, setCursor] = useState<number | null>(null);
+  const [partId, setPartId] = useState(data.partId);
+  const pianoChoices = data.parts.filter((p) => p.piano);
+  const part = data.parts.find((p) => p.id === partId) ?? data.parts[0];
+  // Only the chosen piano part's staves are hands: upper = right, lower = left; other parts are shown, greyed.
+  const staffHands = useMemo(() => {
+    const total = data.parts.reduce((n, p) => n + p.staves, 0);
+    const hands: ("right" | "left" | null)[] = Array.from({ length: total }, () => null);
+    if (part) {
+      hands[part.firstStaff] = "right";
+      if (part.staves >= 2) hands[part.firstStaff + 1] = "left";
+    }
+    return hands;
+  }, [data.parts, part]);
 
   const describe = (s: KnotDraft) => {
     const a = data.bars[s.from]?.number ?? String(s.from + 1);
@@ -44,10 +57,13 @@ export function PieceWorkspace({
   const play = useMemo(() => {
     const from = selection ? data.bars[selection.from] : data.bars[0];
     const to = selection ? data.bars[selection.to] : data.bars[data.bars.length - 1];
-    const staff = selection?.hand === "right" ? 1 : selection?.hand === "left" ? 2 : null;
-    const events = data.playback.events.filter((e) => staff === null || data.staves < 2 || e.staff === staff);
+    const hand = selection?.hand;
+    const events = data.playback.events.filter((e) => {
+      const h = staffHands[e.staff - 1];
+      return !hand || (h != null && (hand === "both" || h === hand));
+    });
     return { startQ: from?.startQ ?? 0, endQ: to?.endQ, events };
-  }, [selection, data]);
+  }, [selection, data, staffHands]);
 
   const barMarks = useMemo(() => data.bars.map((b) => ({ number: b.printed, startQ: b.startQ })), [data.bars]);
 
@@ -74,8 +90,27 @@ export function PieceWorkspace({
           onCursor={setCursor}
           label={selection ? `Play ${describe(selection)}` : `Play ${title}`}
         />
+        {pianoChoices.length > 1 ? (
+          <label className="flex items-center gap-2 text-sm font-bold text-walnut">
+            Piano part
+            <select
+              value={partId}
+              onChange={(e) => {
+                setPartId(e.target.value);
+                setSelection(null);
+              }}
+              className="rounded-md border border-line bg-card px-2 py-1 font-normal text-ink"
+              data-testid="piano-part"
+            >
+              {pianoChoices.map((p) => (
+                <option key={p.id} value={p.id}>{p.name || p.id}</option>
+              ))}
+            </select>
+          </label>
+        ) : null}
         <ScoreView
           musicxml={data.musicxml}
+          staffHands={staffHands}
           selection={selection}
           onSelectionChange={setSelection}
           onConfirm={setSelection}
@@ -87,7 +122,7 @@ export function PieceWorkspace({
       <aside className="flex flex-col gap-6" aria-label="Knot and difficulty">
         <section aria-labelledby="mark-knot-title" className="rounded-2xl border border-line bg-card p-5">
           <h2 id="mark-knot-title" className="mb-3 text-lg font-semibold">Mark a knot</h2>
-          <KnotForm selection={selection} describe={describe} tags={tags} save={(input) => saveKnot(input)} />
+          <KnotForm selection={selection} describe={describe} tags={tags} save={(input) => saveKnot({ ...input, part: partId })} />
           <p className="mt-4 border-t border-line pt-3 text-xs text-muted">
             {CAUTION.text}
           </p>

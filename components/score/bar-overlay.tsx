@@ -1,7 +1,7 @@
 "use client";
 /** The layer over the engraved SVG: one cell per bar per staff for hover, selection, focus, heat and the playback cursor. */
 import { memo } from "react";
-import { staffInHand, type BarCell, type BarSelection } from "./bar-selection";
+import { handOfStaff, isHandStaff, staffInHand, type BarCell, type BarSelection, type StaffHands } from "./bar-selection";
 import { barAtTime, cursorX, type BarBox, type ScoreLayout } from "./score-layout";
 
 export interface HeatMap {
@@ -19,19 +19,21 @@ interface Props {
   focus: BarCell | null;
   heat: HeatMap | null;
   cursorTime: number | null;
+  /** Which staves are hands (others are greyed and never selected). */
+  staffHands?: StaffHands;
 }
 
-function heatOf(heat: HeatMap | null, box: BarBox): number {
-  if (!heat) return 0;
-  const v = (box.staff === 1 ? heat.left : heat.right)[box.bar] ?? 0;
+function heatOf(heat: HeatMap | null, box: BarBox, hands?: StaffHands): number {
+  if (!heat || !isHandStaff(box.staff, hands)) return 0;
+  const v = (handOfStaff(box.staff, hands) === "left" ? heat.left : heat.right)[box.bar] ?? 0;
   return Math.max(0, Math.min(1, v));
 }
 
-function isSelected(sel: BarSelection | null, box: BarBox): boolean {
-  return !!sel && box.bar >= sel.from && box.bar <= sel.to && staffInHand(box.staff, sel.hand);
+function isSelected(sel: BarSelection | null, box: BarBox, hands?: StaffHands): boolean {
+  return !!sel && box.bar >= sel.from && box.bar <= sel.to && staffInHand(box.staff, sel.hand, hands);
 }
 
-function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, cursorTime }: Props) {
+function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, cursorTime, staffHands }: Props) {
   const current = cursorTime == null ? null : barAtTime(layout.bars, cursorTime);
   const currentBoxes = current ? layout.boxes.filter((b) => b.bar === current.bar) : [];
   let cursor: { x: number; top: number; bottom: number } | null = null;
@@ -50,10 +52,11 @@ function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, c
       style={{ transform: `translate(${offset.x}px, ${offset.y}px)` }}
     >
       {layout.boxes.map((box) => {
-        const selected = isSelected(selection, box);
+        const selected = isSelected(selection, box, staffHands);
+        const handStaff = isHandStaff(box.staff, staffHands);
         const hovered = hover?.bar === box.bar && hover.staff === box.staff;
         const focused = focus?.bar === box.bar && focus.staff === box.staff;
-        const h = heatOf(heat, box);
+        const h = heatOf(heat, box, staffHands);
         const playing = current?.bar === box.bar;
         const background = selected
           ? "rgba(208, 138, 60, 0.3)"
@@ -61,15 +64,18 @@ function BarOverlayInner({ layout, offset, pad, selection, hover, focus, heat, c
             ? "rgba(86, 115, 94, 0.16)"
             : h > 0.02
               ? `rgba(165, 64, 44, ${(0.04 + 0.22 * h).toFixed(3)})`
-              : hovered
+              : hovered && handStaff
                 ? "rgba(107, 95, 87, 0.1)"
-                : "transparent";
+                : !handStaff
+                  ? "rgba(107, 95, 87, 0.06)"
+                  : "transparent";
         return (
           <div
             key={`${box.bar}-${box.staff}`}
             data-bar={box.bar}
             data-staff={box.staff}
             data-selected={selected ? "true" : undefined}
+            data-hand={handStaff ? handOfStaff(box.staff, staffHands) : "none"}
             data-heat={h > 0 ? h.toFixed(2) : undefined}
             className={[
               "absolute rounded-sm",

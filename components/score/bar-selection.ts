@@ -15,19 +15,33 @@ export interface BarCell {
   staff: number;
 }
 
-/** The hand a staff belongs to on a grand staff. */
-export function handOfStaff(staff: number): "right" | "left" {
+/**
+ * The hand of each engraved staff (0-based, counted across all parts), or null for a staff that is not
+ * a hand (a voice or another instrument: shown, not selectable). Without it, staff 0 is the right hand
+ * and staff 1 the left.
+ */
+export type StaffHands = readonly ("right" | "left" | null)[];
+
+/** The hand a staff belongs to on a grand staff (or by the score's staff map). */
+export function handOfStaff(staff: number, hands?: StaffHands): "right" | "left" {
+  if (hands) return hands[staff] ?? "right";
   return staff === 1 ? "left" : "right";
 }
 
+/** Whether a staff can be selected as a hand. */
+export function isHandStaff(staff: number, hands?: StaffHands): boolean {
+  return !hands || hands[staff] != null;
+}
+
 /** Whether a staff is part of a selection's hand. */
-export function staffInHand(staff: number, hand: SelectionHand): boolean {
-  return hand === "both" || handOfStaff(staff) === hand;
+export function staffInHand(staff: number, hand: SelectionHand, hands?: StaffHands): boolean {
+  if (!isHandStaff(staff, hands)) return false;
+  return hand === "both" || handOfStaff(staff, hands) === hand;
 }
 
 /** The hand after pointing at a staff: "both" stays "both" (chosen on purpose), otherwise the staff's hand. */
-export function handAfterPointing(current: SelectionHand | undefined, staff: number): SelectionHand {
-  return current === "both" ? "both" : handOfStaff(staff);
+export function handAfterPointing(current: SelectionHand | undefined, staff: number, hands?: StaffHands): SelectionHand {
+  return current === "both" ? "both" : handOfStaff(staff, hands);
 }
 
 /** The selection spanning an anchor bar and another bar, in either order. */

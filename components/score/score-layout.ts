@@ -38,7 +38,10 @@ export function unitToPx(zoom: number): number {
   return 10 * zoom;
 }
 
-/** Reads bar boxes and timings after `osmd.render()`. Only the first two staves are selectable. */
+/**
+ * Reads bar boxes and timings after `osmd.render()`, for every engraved staff (a song's voice staff
+ * too; the score view's staff map decides which staves are hands).
+ */
 export function readLayout(osmd: OpenSheetMusicDisplay): ScoreLayout {
   const scale = unitToPx(osmd.Zoom);
   const sheet = osmd.Sheet;
@@ -54,7 +57,7 @@ export function readLayout(osmd: OpenSheetMusicDisplay): ScoreLayout {
     const entries: { q: number; x: number }[] = [];
     const startQ = first.parentSourceMeasure.AbsoluteTimestamp.RealValue * 4;
     row.forEach((gm, staff) => {
-      if (!gm || staff > 1) return;
+      if (!gm) return;
       staffCount = Math.max(staffCount, staff + 1);
       const ps = gm.PositionAndShape;
       boxes.push({

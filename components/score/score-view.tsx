@@ -11,6 +11,7 @@ import {
   describeSelection,
   handAfterPointing,
   handOfStaff,
+  isHandStaff,
   moveCell,
   sameSelection,
   spanSelection,
@@ -18,6 +19,7 @@ import {
   type BarSelection,
   type GridKey,
   type SelectionHand,
+  type StaffHands,
 } from "./bar-selection";
 import { HandChooser, ZoomControls } from "./score-toolbar";
 import { hitTest, unitToPx } from "./score-layout";
@@ -38,6 +40,8 @@ export interface ScoreViewProps {
   cursorTime?: number | null;
   /** Shows the right / left / both chooser (default: when selectable). */
   showHandChooser?: boolean;
+  /** The hand of each engraved staff; null marks a staff that is shown but cannot be selected (a voice). */
+  staffHands?: StaffHands;
   label?: string;
   className?: string;
 }
@@ -66,6 +70,7 @@ export function ScoreView({
   heat = null,
   cursorTime = null,
   showHandChooser,
+  staffHands,
   label = "Score",
   className = "",
 }: ScoreViewProps) {
@@ -94,6 +99,10 @@ export function ScoreView({
   const barNumbers = useMemo(() => layout.bars.map((b) => b.number), [layout]);
   const barCount = layout.bars.length;
   const staffCount = Math.max(1, layout.staffCount);
+  // The staves a selection may use: all, or only the hand staves of the score's staff map.
+  const handStaves = staffHands ? staffHands.map((h, i) => (h ? i : -1)).filter((i) => i >= 0) : null;
+  const firstHandStaff = handStaves?.[0] ?? 0;
+  const handStaffCount = handStaves ? handStaves.length : staffCount;
   const pad = unitToPx(zoom) * 1.2;
 
   function commit(next: BarSelection | null, confirm = false) {
@@ -106,7 +115,7 @@ export function ScoreView({
   function cellAt(e: React.PointerEvent, reach: number): BarCell | null {
     const rect = frame.current!.getBoundingClientRect();
     const hit = hitTest(layout.boxes, e.clientX - rect.left - offset.x, e.clientY - rect.top - offset.y, reach);
-    return hit ? { bar: hit.bar, staff: hit.staff } : null;
+    return hit && isHandStaff(hit.staff, staffHands) ? { bar: hit.bar, staff: hit.staff } : null;
   }
 
   function onPointerDown(e: React.PointerEvent<HTMLDivElement>) {
@@ -115,7 +124,7 @@ export function ScoreView({
     if (!cell) return;
     e.preventDefault();
     frame.current?.focus({ preventScroll: true });
-    const hand = handAfterPointing(currentHand, cell.staff);
+    const hand = handAfterPointing(currentHand, cell.staff, staffHands);
     const next =
       e.shiftKey && anchor.current !== null
         ? spanSelection(anchor.current, cell.bar, currentHand)
@@ -148,26 +157,27 @@ export function ScoreView({
 
   function onKeyDown(e: React.KeyboardEvent<HTMLDivElement>) {
     if (!selectable || barCount === 0) return;
-    const cur = focusCell ?? { bar: sel?.from ?? 0, staff: sel?.hand === "left" ? 1 : 0 };
+    const cur = focusCell ?? { bar: sel?.from ?? 0, staff: firstHandStaff + (sel?.hand === "left" ? 1 : 0) };
     if (GRID_KEYS.has(e.key)) {
       e.preventDefault();
       const key = e.key as GridKey;
-      const cell = moveCell(cur, key, barCount, staffCount);
+      const moved = moveCell({ ...cur, staff: cur.staff - firstHandStaff }, key, barCount, handStaffCount);
+      const cell = { ...moved, staff: moved.staff + firstHandStaff };
       const vertical = key === "ArrowUp" || key === "ArrowDown";
       setFocusCell(cell);
       if (vertical) {
-        const hand: SelectionHand = e.shiftKey && staffCount > 1 ? "both" : handOfStaff(cell.staff);
+        const hand: SelectionHand = e.shiftKey && handStaffCount > 1 ? "both" : handOfStaff(cell.staff, staffHands);
         commit(sel ? { ...sel, hand } : spanSelection((anchor.current = cell.bar), cell.bar, hand));
       } else if (e.shiftKey) {
         if (anchor.current === null) anchor.current = cur.bar;
         commit(spanSelection(anchor.current, cell.bar, currentHand));
       } else {
         anchor.current = cell.bar;
-        commit(spanSelection(cell.bar, cell.bar, handAfterPointing(currentHand, cell.staff)));
+        commit(spanSelection(cell.bar, cell.bar, handAfterPointing(currentHand, cell.staff, staffHands)));
       }
     } else if (e.key === "Enter" || e.key === " ") {
       e.preventDefault();
-      commit(sel ?? spanSelection(cur.bar, cur.bar, handOfStaff(cur.staff)), true);
+      commit(sel ?? spanSelection(cur.bar, cur.bar, handOfStaff(cur.staff, staffHands)), true);
     } else if (e.key === "Escape" && sel) {
       e.preventDefault();
       anchor.current = null;
@@ -184,7 +194,7 @@ export function ScoreView({
   return (
     <section className={`flex flex-col gap-2 ${className}`} aria-label={label} data-status={status}>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        {(showHandChooser ?? selectable) && staffCount > 1 ? (
+        {(showHandChooser ?? selectable) && handStaffCount > 1 ? (
           <HandChooser value={currentHand} onChange={chooseHand} />
         ) : (
           <span />
@@ -220,7 +230,8 @@ export function ScoreView({
               pad={pad}
               selection={sel}
               hover={hover}
-              focus={focused ? (focusCell ?? { bar: sel?.from ?? 0, staff: sel?.hand === "left" ? 1 : 0 }) : null}
+              focus={focused ? (focusCell ?? { bar: sel?.from ?? 0, staff: firstHandStaff + (sel?.hand === "left" ? 1 : 0) }) : null}
+              staffHands={staffHands}
               heat={heat}
               cursorTime={cursorTime}
             />

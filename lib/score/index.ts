@@ -14,6 +14,8 @@ export { assertSafeXml, cleanXml, escapeXml, MAX_XML_CHARS } from "./sanitize";
 export { isZip, listZip, unpackMxl, MXL_LIMITS } from "./mxl";
 export { selectPassage, barIndex, barNumbers, sonorities, beatGroups, beatLength, figureGroups, type PassageRequest } from "./passage";
 export { mergeTies } from "./ties";
+export { partMeasure } from "./part-measure";
+export { handsOfPart, pianoCandidates, pianoPart, type PianoCandidate } from "./parts";
 export { q, fromDivisions, barLength, maxTime, compareTime, toQuarters, ZERO } from "./time";
 export { midiOf, makePitch, pitchName, isStep, octaveShiftSemitones, STEP_SEMITONES } from "./pitch";
 export * from "./write";

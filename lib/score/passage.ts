@@ -4,6 +4,8 @@
  */
 import { ScoreError } from "./errors";
 import { beatGroups, figureGroups, sonorities } from "./passage-groups";
+import { handsOfPart, pianoPart } from "./parts";
+import { partMeasure } from "./part-measure";
 import type { Hand, NoteEvent, NoteGroup, Passage, Score } from "./types";
 
 export { beatGroups, beatLength, figureGroups, sonorities } from "./passage-groups";
@@ -17,15 +19,16 @@ export interface PassageRequest {
 }
 
 /**
- * Cut a passage out of a score. Staff 1 is the right hand and staff 2 the left; in a one-staff part
- * both hands read staff 1, and "both" then gives all notes to the right hand.
+ * Cut a passage out of a score. Without a part, the piano part is used (found by staves and name, see
+ * parts.ts). Staff 1 is the right hand and staff 2 the left, and a cross-staff note follows its voice's
+ * hand; in a one-staff part both hands read staff 1, and "both" then gives all notes to the right hand.
  *
  * @example
  * const knot = selectPassage(score, { hand: "left", from: 4, to: 7 });
  * knot.sonorities.left[0].notes.map((n) => n.pitch?.midi); // [43, 50, 55]
  */
 export function selectPassage(score: Score, request: PassageRequest): Passage {
-  const part = request.part ? score.parts.find((p) => p.id === request.part) : score.parts[0];
+  const part = request.part ? score.parts.find((p) => p.id === request.part) : (pianoPart(score) ?? score.parts[0]);
   if (!part) throw new ScoreError("bad-passage", `The score has no part "${request.part}"`);
   const { from, to, hand } = request;
   const last = score.measures.length - 1;
@@ -35,10 +38,11 @@ export function selectPassage(score: Score, request: PassageRequest): Passage {
   const staffOf = { right: 1, left: part.staves >= 2 ? 2 : 1 };
   const inBars = score.events.filter((e) => e.part === part.id && e.measure >= from && e.measure <= to);
   const oneStaff = staffOf.left === staffOf.right;
+  const handOf = oneStaff ? null : handsOfPart(score.events.filter((e) => e.part === part.id), part.id);
   const handEvents = (h: Hand): NoteEvent[] =>
-    oneStaff ? (h === "right" || hand === "left" ? inBars : []) : inBars.filter((e) => e.staff === staffOf[h]);
+    oneStaff ? (h === "right" || hand === "left" ? inBars : []) : inBars.filter((e) => handOf!(e) === h);
   const events = hand === "both" ? inBars : handEvents(hand);
-  const measures = score.measures.slice(from, to + 1);
+  const measures = score.measures.slice(from, to + 1).map((m) => partMeasure(m, part.id));
   const build = (h: Hand) => {
     if (hand !== "both" && hand !== h) return { sons: [], groups: [] as NoteGroup[] };
     const sons = sonorities(handEvents(h), h);

@@ -1,6 +1,7 @@
 import Fraction from "fraction.js";
 import { describe, expect, test } from "vitest";
-import { GRACE_QUARTERS, toPerformance, VELOCITY } from "./performance";
+import { GRACE_QUARTERS, ROLL_QUARTERS, toPerformance, VELOCITY } from "./performance";
+import { readScore } from "./read";
 import { buildScore } from "./test-builders";
 
 const scale = buildScore({
@@ -102,5 +103,37 @@ describe("toPerformance", () => {
     expect(perf.beats.filter((b) => b.barStart).map((b) => b.time)).toEqual([0, 4]);
     const sixEight = buildScore({ bars: 1, time: { beats: 6, beatType: 8 }, notes: [{ pitch: "C4", onset: 0, duration: new Fraction(3) }] });
     expect(toPerformance(sixEight, { bpm: 60 }).beats.map((b) => b.time)).toEqual([0, 1.5]);
+  });
+});
+
+describe("tremolos and arpeggios are played", () => {
+  // MusicXML 4.0 <tremolo>: the number of marks (1 = eighths, 2 = sixteenths, 3 = 32nds); type "single" repeats
+  // one note, "start"/"stop" alternate two notes whose <time-modification> 2:1 halves their written value.
+  const file = (notes: string) => `<?xml version="1.0"?><score-partwise version="4.0"><part-list><score-part id="P1"><part-name>P</part-name></score-part></part-list>
+<part id="P1"><measure number="1"><attributes><divisions>4</divisions><time><beats>4</beats><beat-type>4</beat-type></time></attributes>${notes}</measure></part></score-partwise>`;
+  const n = (step: string, dur: number, type: string, extra = "", notations = "") =>
+    `<note>${extra.includes("<chord/>") ? "<chord/>" : ""}<pitch><step>${step}</step><octave>4</octave></pitch><duration>${dur}</duration><type>${type}</type>${extra.replace("<chord/>", "")}${notations ? `<notations>${notations}</notations>` : ""}</note>`;
+
+  test("a single-note tremolo with two marks plays sixteenths for its whole length", () => {
+    const { score } = readScore(file(n("C", 4, "quarter", "", "<ornaments><tremolo type=\"single\">2</tremolo></ornaments>") + n("D", 12, "half", "<dot/>")));
+    const c = toPerformance(score).notes.filter((x) => x.midi === 60);
+    expect(c.map((x) => [x.startQuarters, x.quarters])).toEqual([[0, 0.25], [0.25, 0.25], [0.5, 0.25], [0.75, 0.25]]);
+  });
+
+  test("a two-note tremolo alternates its two notes across the pair's span", () => {
+    const tm = "<time-modification><actual-notes>2</actual-notes><normal-notes>1</normal-notes></time-modification>";
+    const { score } = readScore(file(
+      n("C", 4, "half", tm, "<ornaments><tremolo type=\"start\">1</tremolo></ornaments>") +
+      n("E", 4, "half", tm, "<ornaments><tremolo type=\"stop\">1</tremolo></ornaments>") + n("G", 8, "half")));
+    const played = toPerformance(score).notes.filter((x) => x.midi !== 67).map((x) => [x.midi, x.startQuarters]);
+    expect(played).toEqual([[60, 0], [64, 0.5], [60, 1], [64, 1.5]]);
+  });
+
+  test("an arpeggiated chord is rolled from the bottom up; a non-arpeggio chord is not", () => {
+    const arp = "<arpeggiate/>";
+    const rolled = readScore(file(n("C", 16, "whole", "", arp) + n("E", 16, "whole", "<chord/>", arp) + n("G", 16, "whole", "<chord/>", arp))).score;
+    expect(toPerformance(rolled).notes.map((x) => [x.midi, x.startQuarters])).toEqual([[60, 0], [64, ROLL_QUARTERS], [67, 2 * ROLL_QUARTERS]]);
+    const flat = readScore(file(n("C", 16, "whole", "", "<non-arpeggiate type=\"bottom\"/>") + n("G", 16, "whole", "<chord/>", "<non-arpeggiate type=\"top\"/>"))).score;
+    expect(toPerformance(flat).notes.map((x) => x.startQuarters)).toEqual([0, 0]);
   });
 });

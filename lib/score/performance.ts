@@ -149,9 +149,53 @@ function staffNotes(events: readonly NoteEvent[], seconds: (q: number) => number
       out.push(note(e, start, GRACE_QUARTERS, Math.max(1, velocity - GRACE_SOFTER), seconds, [e.id]));
       continue;
     }
-    out.push(note(e, e.onset.valueOf(), e.duration.valueOf(), velocity, seconds, ids.get(e.id) ?? [e.id]));
+    const startQ = e.onset.valueOf() + rollOffset(merged, e);
+    const chain = ids.get(e.id) ?? [e.id];
+    if (e.tremolo) {
+      for (const [at, len] of tremoloStrokes(e)) out.push(note(e, at, len, velocity, seconds, chain));
+      continue;
+    }
+    out.push(note(e, startQ, e.onset.valueOf() + e.duration.valueOf() - startQ, velocity, seconds, chain));
   }
   return out;
+}
+
+/** Most strokes one tremolo note plays (a longer tremolo plays slower strokes). */
+export const MAX_TREMOLO_STROKES = 64;
+/** Delay between the notes of a rolled (arpeggiated) chord, in quarter notes (common practice, from memory). */
+export const ROLL_QUARTERS = 1 / 16;
+
+/**
+ * The strokes a tremolo note plays, as [start, length] in quarter notes. A stroke lasts 1/2^marks of a
+ * quarter (1 stroke mark = eighths, 2 = sixteenths, 3 = 32nds). A single-note tremolo repeats its note;
+ * in a two-note tremolo the first note ("start") plays the even strokes of the pair's whole span and
+ * the second ("stop") the odd ones.
+ */
+function tremoloStrokes(e: NoteEvent): [number, number][] {
+  const t = e.tremolo!;
+  const dur = e.duration.valueOf();
+  const pair = t.type === "start" || t.type === "stop";
+  const span = pair ? 2 * dur : dur;
+  let stroke = 1 / 2 ** Math.max(1, Math.min(t.type === "unmeasured" ? 3 : t.marks || 3, 8));
+  while (span / stroke > MAX_TREMOLO_STROKES) stroke *= 2;
+  const from = t.type === "stop" ? e.onset.valueOf() - dur : e.onset.valueOf();
+  const count = Math.max(1, Math.round(span / stroke));
+  const out: [number, number][] = [];
+  for (let k = 0; k < count; k++) {
+    if (pair && (k % 2 === 1) !== (t.type === "stop")) continue;
+    out.push([from + k * stroke, stroke]);
+  }
+  if (out.length === 0) out.push([e.onset.valueOf(), dur]);
+  return out;
+}
+
+/** How late an arpeggiated chord note starts: one roll step per lower note of its chord (upper first for "down"). */
+function rollOffset(events: readonly NoteEvent[], e: NoteEvent): number {
+  if (!e.arpeggio || e.arpeggio === "non-arpeggiate" || !e.pitch) return 0;
+  const chord = events.filter((x) => x.pitch && !x.grace && x.arpeggio && x.arpeggio !== "non-arpeggiate" && x.onset.equals(e.onset) && x.voice === e.voice);
+  const below = chord.filter((x) => x.pitch!.midi < e.pitch!.midi).length;
+  const step = Math.min(ROLL_QUARTERS, e.duration.valueOf() / (chord.length + 1));
+  return (e.arpeggio === "down" ? chord.length - 1 - below : below) * step;
 }
 
 /** The grace step `e` belongs to (0 = first), counting non-chord grace notes at its onset. */

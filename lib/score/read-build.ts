@@ -29,6 +29,9 @@ export function buildScore(raw: RawScore): Score {
     let length = rows.reduce<Fraction>((l, m) => maxTime(l, m.length), ZERO);
     if (length.valueOf() === 0) length = barLength(head.start.time);
     const tempo = rows.find((m) => m.tempo !== undefined)?.tempo;
+    const partAttributes = parts.length > 1
+      ? Object.fromEntries(parts.filter((p) => p.measures[i]).map((p) => [p.id, { clefs: p.measures[i].start.clefs, changes: p.measures[i].changes }]))
+      : undefined;
     const repeat = rows.find((m) => m.repeat !== undefined)?.repeat;
     measures.push({
       index: i,
@@ -43,6 +46,7 @@ export function buildScore(raw: RawScore): Score {
       changes: head.changes,
       ...(repeat ? { repeat } : {}),
       ...(tempo !== undefined ? { tempo } : {}),
+      ...(partAttributes ? { partAttributes } : {}),
     });
     start = start.add(length);
   }

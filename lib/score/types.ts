@@ -151,6 +151,11 @@ export interface Measure {
   readonly repeat?: RepeatMarks;
   /** Metronome mark (quarter-note beats per minute) written in this bar, if any. */
   readonly tempo?: number;
+  /**
+   * Clefs and changes of each part, by part id, when the score has several parts (`clefs` and `changes`
+   * above are the first part's). A song's piano part has its own clefs; see `partMeasure`.
+   */
+  readonly partAttributes?: Readonly<Record<string, { readonly clefs: readonly Clef[]; readonly changes: readonly AttributeChange[] }>>;
 }
 
 export interface PartInfo {

@@ -71,7 +71,9 @@ export interface NoteValue {
  * Splits a sounding duration into notated values (tied by the caller). Keeps the given written
  * type when it matches the duration; otherwise derives type and dots; drops the tuplet when the
  * duration only fits without it; splits greedily (longest value first) when no single value fits.
- * Falls back to one value without a type when even that fails (`<type>` is optional in MusicXML).
+ * A duration with an odd denominator and no tuplet (a rest filling a tuplet's gap) is written under
+ * the plain tuplet it implies (1/3 → 3:2). Falls back to one value without a type only when even
+ * that fails (`<type>` is optional in MusicXML).
  * @example
  *   noteValues(new Fraction(5, 4), { type: null, dots: 0, tuplet: null }).map((v) => v.type);
  *   // ["quarter", "16th"]
@@ -99,7 +101,26 @@ export function noteValues(duration: Fraction, written: Written): NoteValue[] {
       }));
     }
   }
+  const implied = impliedTuplet(duration);
+  if (implied) {
+    const single = typeFor(writtenOf(duration, implied));
+    if (single) return [{ duration, ...single, tuplet: implied }];
+    const parts = greedy(writtenOf(duration, implied));
+    if (parts) return parts.map((p) => ({ duration: p.len.mul(implied.normal, implied.actual), type: p.type, dots: p.dots, tuplet: implied }));
+  }
   return [{ duration, type: null, dots: 0, tuplet }];
+}
+
+/**
+ * The plain tuplet a duration needs when no note value shows it: its odd denominator n as n notes in
+ * the time of the largest power of two below n (1/3 quarter → 3:2, 1/5 → 5:4, 1/7 → 7:4), so that a
+ * gap left by a tuplet still gets a `<type>`.
+ */
+function impliedTuplet(duration: Fraction): { actual: number; normal: number } | null {
+  let odd = Number(duration.d);
+  while (odd % 2 === 0) odd /= 2;
+  if (odd < 3 || odd > 64) return null;
+  return { actual: odd, normal: 2 ** Math.floor(Math.log2(odd)) };
 }
 
 function greedy(written: Fraction): { len: Fraction; type: string; dots: number }[] | null {

@@ -8,6 +8,7 @@ import { divisionsFor } from "./write-durations";
 import { measureXml, type PartState } from "./write-measure";
 import { piecesByMeasure, type Piece } from "./write-pieces";
 import { partHomeStaffs } from "./write-voices";
+import { partMeasure } from "./part-measure";
 import { el } from "./write-xml";
 
 /**
@@ -76,7 +77,7 @@ function partXml(score: Score, part: PartInfo, id: string): string {
   const measures = score.measures;
   if (measures.length === 0) return `<part id="${id}">\n<measure number="1"/>\n</part>`;
   const body = measures.map((m, i) =>
-    measureXml(m, byBar[i], {
+    measureXml(partMeasure(m, part.id), byBar[i], {
       part: part.id,
       staves,
       divisions,

@@ -3,6 +3,7 @@ import {
   describeSelection,
   handAfterPointing,
   handOfStaff,
+  isHandStaff,
   moveCell,
   sameSelection,
   spanSelection,
@@ -55,5 +56,19 @@ describe("bar-selection", () => {
     expect(sameSelection({ from: 1, to: 2, hand: "left" }, { from: 1, to: 2, hand: "left" })).toBe(true);
     expect(sameSelection({ from: 1, to: 2, hand: "left" }, { from: 1, to: 2, hand: "both" })).toBe(false);
     expect(sameSelection(null, undefined)).toBe(true);
+  });
+});
+
+describe("staff map of a song (voice + piano)", () => {
+  // Engraved staves: 0 = voice, 1 = piano upper (right hand), 2 = piano lower (left hand).
+  const hands = [null, "right", "left"] as const;
+  test("only the piano's staves are hands; the voice staff is never selected", () => {
+    expect(isHandStaff(0, hands)).toBe(false);
+    expect(handOfStaff(1, hands)).toBe("right");
+    expect(handOfStaff(2, hands)).toBe("left");
+    expect(staffInHand(0, "both", hands)).toBe(false);
+    expect(staffInHand(0, "right", hands)).toBe(false);
+    expect(staffInHand(2, "both", hands)).toBe(true);
+    expect(handAfterPointing("right", 2, hands)).toBe("left");
   });
 });

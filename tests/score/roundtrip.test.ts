@@ -11,6 +11,7 @@ import { mergeTies } from "../../lib/score/ties";
 import type { NoteEvent, Score } from "../../lib/score/types";
 import { writeMusicXML } from "../../lib/score/write";
 import { verovioNotes, verovioToolkit } from "../support/verovio";
+import { withoutHalfTies } from "./notated-events";
 import { hasXmllint, referenceDir, validateMusicXml } from "../support/xmllint";
 
 const corpus = path.join(referenceDir(), "musicxml");
@@ -40,19 +41,6 @@ function soundingKeys(events: readonly NoteEvent[]): string[] {
       [e.part, e.staff, e.voice, e.pitch!.midi, e.onset.toFraction(), e.duration.toFraction(), e.tie, JSON.stringify(e.fingering ?? [])].join(" "),
     )
     .sort();
-}
-
-/**
- * The tie flags the writer keeps: a tie stop with no start before it has no MusicXML form and is dropped;
- * a start with no stop is written as `<tied type="let-ring">` (MusicXML 4.0 <tied>: "let-ring" — the
- * note sounds on, tied to nothing) and reads back as a start. Never half a pair.
- */
-function withoutHalfTies(events: readonly NoteEvent[]): NoteEvent[] {
-  const ends = new Set(events.filter((e) => e.pitch && (e.tie === "start" || e.tie === "continue")).map((e) => `${e.part} ${e.pitch!.midi} ${e.onset.add(e.duration).toFraction()}`));
-  return events.map((e) => {
-    if (!e.pitch || (e.tie !== "stop" && e.tie !== "continue") || ends.has(`${e.part} ${e.pitch.midi} ${e.onset.toFraction()}`)) return e;
-    return { ...e, tie: e.tie === "continue" ? "start" : "none" };
-  });
 }
 
 const graceKeys = (events: readonly NoteEvent[]): string[] =>

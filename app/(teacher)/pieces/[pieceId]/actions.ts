@@ -10,7 +10,7 @@ import { PROBLEM_TAGS } from "@/lib/drills";
 import { knotLengthProblem } from "@/lib/limits/work";
 import { readScore } from "@/lib/score";
 import { requireTeacher } from "@/lib/auth/session";
-import { printedBar } from "./piece-data";
+import { knotPart, printedBar } from "./piece-data";
 
 const KnotInput = z
   .object({
@@ -18,6 +18,7 @@ const KnotInput = z
     from: z.number().int().min(0),
     to: z.number().int().min(0),
     hand: z.enum(["right", "left", "both"]),
+    part: z.string().min(1).max(200).optional(),
     tags: z.array(z.enum(PROBLEM_TAGS)).min(1, "Tick at least one problem.").max(PROBLEM_TAGS.length),
     note: z.string().trim().max(500, "Keep the note under 500 characters.").optional(),
   })
@@ -39,11 +40,13 @@ export async function createKnot(scoreId: string, raw: KnotInput): Promise<Actio
   if (!from || !to) return fail("Those bars are not in this piece.", { to: ["Select bars inside the piece."] });
   const tooLong = knotLengthProblem(input.to - input.from + 1);
   if (tooLong) return fail(tooLong, { to: [tooLong] });
+  const part = knotPart(score, input.part);
+  if (!part) return fail("That part cannot be played as a piano hand.", { part: ["Pick the piano part."] });
   const id = await insertPassage(db, {
     studioId: ctx.studioId,
     scoreId: row.id,
     createdBy: ctx.user.id,
-    part: score.parts[0]?.id ?? "P1",
+    part,
     hand: input.hand,
     fromBar: printedBar(from.number, from.index),
     toBar: printedBar(to.number, to.index),
