@@ -129,8 +129,10 @@ export function passageSlots(
     const next = sonorities[i + 1]?.onset ?? range.to;
     const end = s.onset.add(s.duration);
     const stop = end.compare(next) > 0 ? next : end;
-    const tuplet = s.notes[0]?.written.tuplet ?? undefined;
-    const slot: Slot = { duration: stop.sub(s.onset), notes: s.notes.map(noteOf), ...(tuplet ? { tuplet } : {}) };
+    const duration = stop.sub(s.onset);
+    // The tuplet of the note that lasts exactly this long (a tuplet voice under a held note), else the first note's.
+    const tuplet = (s.notes.find((n) => n.written.tuplet && n.duration.equals(duration)) ?? s.notes[0])?.written.tuplet ?? undefined;
+    const slot: Slot = { duration, notes: s.notes.map(noteOf), ...(tuplet ? { tuplet } : {}) };
     const mapped = map(s, i, slot);
     out.push(...(Array.isArray(mapped) ? (mapped as Slot[]) : [mapped as Slot]));
     t = s.onset.add(slot.duration);
