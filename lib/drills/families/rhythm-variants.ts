@@ -172,9 +172,10 @@ function dottedPlan(passage: Passage, runs: Sonority[][], order: "long-short" | 
     const { perBeat } = runFeel(v, passage.time);
     // A dotted pair on anything shorter than a sixteenth would need 64ths (DRILL-RUBRIC 2: no invented values).
     if (perBeat === null || v.compare(new Fraction(1, 4).mul(ratioScale(run[0]))) < 0) continue;
-    // Plain values and 3:2 triplets only, in groupings a student reads (1, 2, 3, 4, 6 or 8 to the beat).
-    const t = ratioOf(run[0]);
-    if ((t && !(t.actual === 3 && t.normal === 2)) || ![1, 2, 3, 4, 6, 8].includes(perBeat)) continue;
+    // Plain values only, in groupings a student reads (1, 2, 3, 4, 6 or 8 to the beat): a dotted
+    // figure inside a tuplet is hard to read and was misread in the gallery (pebble-study bars 1–2);
+    // tuplet runs are drilled by regrouping and accents instead.
+    if (ratioOf(run[0]) || ![1, 2, 3, 4, 6, 8].includes(perBeat)) continue;
     const unit = perBeat >= 2 ? beat : v.mul(2);
     const groups = new Map<string, Sonority[]>();
     for (const s of run) {

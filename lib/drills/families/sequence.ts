@@ -125,7 +125,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     const base = { family: "sequence", tempo: defaultTempo(passage), warnings: [...warnings, ...extra] };
     const out = [
       buildDrill(passage, {
-        ...base, variant: "sequence", hands: hand, title: `Figure moved ${up} by ${motion}`,
+        ...base, variant: "sequence", hands: hand, title: `Figure moved ${up} by ${motion}${passageHands(passage).length > 1 ? ` (${hand} hand)` : ""}`,
         teacherNote: "Moving the figure through the key keeps its shape while the keys under the fingers change, so the hand learns the shape, not one set of keys.",
         studentNote: `Play the figure, then again ${motion} ${up}, keeping the same fingering shape and a steady pulse.`,
         segments: [{ [hand]: [...slotsOf("main", n), ...(n ? [] : [restOf(durations[0])])] }],
@@ -133,7 +133,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     ];
     if (withMirror) {
       out.push(buildDrill(passage, {
-        ...base, variant: "mirror", hands: "both", title: "Figure with its mirror in the other hand",
+        ...base, variant: "mirror", hands: "both", title: `Figure with its mirror in the other hand${passageHands(passage).length > 1 ? ` (${hand} hand leads)` : ""}`,
         teacherNote: "In contrary motion both hands use the same fingers at the same moment, which makes the fingering easy to learn and to check.",
         studentNote: `The ${other} hand plays the figure upside down while the ${hand} hand plays it as written; match the fingers of both hands.`,
         segments: [{ [hand]: slotsOf("main", n), [other]: slotsOf("mirror", n) }],
