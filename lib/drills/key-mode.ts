@@ -61,6 +61,15 @@ function correlation(hist: readonly number[], profile: readonly number[], tonicC
  * passageKey(cMajorPassage); // { tonic: "C", mode: "major", fifths: 0 }
  */
 export function passageKey(passage: Pick<Passage, "key" | "sonorities">): PassageKey {
+  let found = KEYS.get(passage);
+  if (!found) KEYS.set(passage, (found = findKey(passage)));
+  return found;
+}
+
+/** Keys found per passage object (passages are immutable; several families ask for the same one). */
+const KEYS = new WeakMap<object, PassageKey>();
+
+function findKey(passage: Pick<Passage, "key" | "sonorities">): PassageKey {
   const sig = passage.key;
   const major = Note.transposeFifths("C", sig.fifths);
   const minor = Key.majorKey(major).minorRelative;
