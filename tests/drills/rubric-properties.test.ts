@@ -161,6 +161,13 @@ describe("rubric properties over the real-score corpus and the demo pieces", () 
     });
   });
 
+  test("DRILL-RUBRIC 8 and sequence: no empty drill, and a sequence states its figure at least twice (it moves)", () => {
+    each((d, _r, label) => {
+      expect(d.score.events.some((e) => e.pitch), label).toBe(true);
+      if (d.family === "sequence") expect(d.warnings.some((w) => /Stopped after [01] repetition/.test(w.message)), label).toBe(false);
+    });
+  });
+
   test("every bar of every staff and voice sums to its time signature (MusicXML 4.0 <time>)", () => {
     each((d, _r, label) => {
       for (const m of d.score.measures) {
