@@ -16,7 +16,10 @@ import { barCap } from "../../lib/drills/length";
 import { isCompound } from "../../lib/drills/meter";
 import { pitchName } from "../../lib/drills/spell";
 import type { Drill } from "../../lib/drills/types";
-import { readScore, selectPassage } from "../../lib/score";
+import { makePassage } from "../../lib/drills/test-passages";
+import { readScore, selectPassage, writeMusicXML } from "../../lib/score";
+import { hasXmllint } from "../support/xmllint";
+import { validateAll } from "./xsd-batch";
 import type { Hand, Passage, Score } from "../../lib/score/types";
 
 const root = path.resolve(__dirname, "../..");
@@ -180,5 +183,15 @@ describe("rubric properties over the real-score corpus and the demo pieces", () 
         for (const [k, sum] of sums) expect(sum.equals(barLength(m.time)), `${label} bar ${m.number} ${k}`).toBe(true);
       }
     });
+  });
+
+  test.runIf(hasXmllint())("6/8 regroupings are written as 2:3 and 4:3 tuplets that validate against the MusicXML 4.0 XSD", () => {
+    const p = makePassage({ time: { beats: 6, beatType: 8 }, right: "C4/8 D4/8 E4/8 F4/8 G4/8 A4/8 B4/8 C5/8 D5/8 E5/8 F5/8 G5/8", left: "C3/4. G3/4. C3/4. G3/4.", tempo: 90 });
+    const { drills } = generateDrills(p, { seed: 1 });
+    const xml = drills.map((d) => writeMusicXML(d.score));
+    // W3C MusicXML 4.0 schema (vendored copy in fixtures/reference).
+    expect(validateAll(xml).filter((e) => e.length)).toEqual([]);
+    const duplets = xml[drills.findIndex((d) => d.variant === "duplets")];
+    expect(duplets).toContain("<time-modification><actual-notes>2</actual-notes><normal-notes>3</normal-notes></time-modification>");
   });
 });
