@@ -129,8 +129,10 @@ export function passageSlots(
     const next = sonorities[i + 1]?.onset ?? range.to;
     const end = s.onset.add(s.duration);
     const stop = end.compare(next) > 0 ? next : end;
-    const tuplet = s.notes[0]?.written.tuplet ?? undefined;
-    const slot: Slot = { duration: stop.sub(s.onset), notes: s.notes.map(noteOf), ...(tuplet ? { tuplet } : {}) };
+    const duration = stop.sub(s.onset);
+    // The tuplet of the note that lasts exactly this long (a tuplet voice under a held note), else the first note's.
+    const tuplet = (s.notes.find((n) => n.written.tuplet && n.duration.equals(duration)) ?? s.notes[0])?.written.tuplet ?? undefined;
+    const slot: Slot = { duration, notes: s.notes.map(noteOf), ...(tuplet ? { tuplet } : {}) };
     const mapped = map(s, i, slot);
     out.push(...(Array.isArray(mapped) ? (mapped as Slot[]) : [mapped as Slot]));
     t = s.onset.add(slot.duration);
@@ -218,6 +220,24 @@ function toEvent(l: LaidEvent, id: string, staff: number, estimated: number | nu
 }
 
 /**
+ * Laid bars without the whole bars of rests before the first note (a pickup bar that holds only a
+ * rest in this hand): the drill starts with music, its later bars and metronome marks moved up.
+ */
+function dropEmptyOpening(
+  laid: { events: LaidEvent[]; bars: number; tempos: Map<number, number> },
+  bar: Fraction,
+): { events: LaidEvent[]; bars: number; tempos: Map<number, number> } {
+  let first = Infinity;
+  for (const e of laid.events) if (e.pitch && e.measure < first) first = e.measure;
+  if (!Number.isFinite(first) || first === 0) return laid;
+  const shift = bar.mul(first);
+  const events = laid.events.filter((e) => e.measure >= first).map((e) => ({ ...e, measure: e.measure - first, onset: e.onset.sub(shift) }));
+  const tempos = new Map<number, number>();
+  for (const [i, t] of [...laid.tempos].sort((a, b) => a[0] - b[0])) tempos.set(Math.max(0, i - first), t);
+  return { events, bars: laid.bars - first, tempos };
+}
+
+/**
  * Build a complete drill: full bars, staves, clefs, fingering, span and warnings.
  *
  * @example
@@ -227,7 +247,7 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const hands: Hand[] = spec.hands ? (spec.hands === "both" ? ["right", "left"] : [spec.hands]) : passageHands(passage);
   const time = spec.time ?? passage.time;
   const bar = barLength(time);
-  const { events: laid, bars, tempos } = laySegments(spec.segments, hands, time);
+  const { events: laid, bars, tempos } = dropEmptyOpening(laySegments(spec.segments, hands, time), bar);
   const staffOf = (h: Hand) => (hands.length === 2 && h === "left" ? 2 : 1);
   const clefs = hands.map((h) => clefFor(h, staffOf(h), laid));
 

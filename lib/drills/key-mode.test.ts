@@ -18,6 +18,11 @@ describe("key-mode", () => {
     // A signature marked minor is kept; a note or two cannot overturn the signature.
     expect(passageKey(makePassage({ right: "C5/2 E5/2", key: { fifths: 0, mode: "minor" } })).mode).toBe("minor");
     expect(passageKey(makePassage({ right: "A4/1", key: C })).mode).toBe("major");
+    // Under one sharp, a bar round A with G♯ centres on A minor (seen in the gallery: Wolf, bars 3–4);
+    // without a note of its own (no G♯, no F natural) a neighbouring key is never chosen.
+    const g = { fifths: 1, mode: "major" };
+    expect(passageKey(makePassage({ right: "[C4,E4,A4]/4 B4/16 C5/16 D5/16 E5/16 F#5/16 G#5/16 [C5,E5,A5]/2", left: "A2/2 E3/2", key: g }))).toEqual({ tonic: "A", mode: "minor", fifths: 0 });
+    expect(passageKey(makePassage({ right: "D4/8 F#4/8 A4/8 D5/8 C5/8 A4/8 F#4/4", left: "D3/2 D3/2", key: g })).fifths).toBe(1);
   });
 
   test("scales are tonal's: Scale.get for major, Key.minorKey(...)[form].scale for minor (reference: tonal)", () => {

@@ -1,6 +1,7 @@
 /**
  * The key and mode of a passage from its notes and its key signature: the signature's major key
- * or its relative minor (tonal's `Key.majorKey(...).minorRelative`), chosen by how well the
+ * or its relative minor (tonal's `Key.majorKey(...).minorRelative`) — or a key one fifth away when
+ * the passage clearly centres there (a bar in the dominant) — chosen by how well the
  * passage's pitch classes (weighted by length, the bass of its first and last sonority counted
  * extra) fit each key's tonal-hierarchy profile; the raised leading tone of the minor counts as
  * minor evidence. Scale drills then use the passage's key, in the minor form the teacher chooses.
@@ -31,6 +32,8 @@ const MINOR_PROFILE = [6.33, 2.68, 3.52, 5.38, 2.6, 3.53, 2.54, 4.75, 3.98, 2.69
  * reading is the default, so only a passage that clearly centres on the minor tonic switches.
  */
 const MARGIN = 0.05;
+/** How much better a key one fifth away from the signature must fit than the signature's own keys. */
+const NEIGHBOUR_MARGIN = 0.1;
 
 function correlation(hist: readonly number[], profile: readonly number[], tonicChroma: number): number {
   const rotated = hist.map((_, i) => hist[(i + tonicChroma) % 12]);
@@ -50,13 +53,23 @@ function correlation(hist: readonly number[], profile: readonly number[], tonicC
 
 /**
  * The key of a passage: its signature's major key or relative minor, whichever its notes fit
- * better (a signature marked minor, or a passage with no notes, keeps the signature's mode).
+ * better, or a neighbouring key (one fifth away) that fits clearly better still; a signature
+ * marked minor, or a passage of fewer than three pitch classes, keeps the signature's key.
  *
  * @example
  * passageKey(aMinorPassage); // { tonic: "A", mode: "minor", fifths: 0 }
  * passageKey(cMajorPassage); // { tonic: "C", mode: "major", fifths: 0 }
  */
 export function passageKey(passage: Pick<Passage, "key" | "sonorities">): PassageKey {
+  let found = KEYS.get(passage);
+  if (!found) KEYS.set(passage, (found = findKey(passage)));
+  return found;
+}
+
+/** Keys found per passage object (passages are immutable; several families ask for the same one). */
+const KEYS = new WeakMap<object, PassageKey>();
+
+function findKey(passage: Pick<Passage, "key" | "sonorities">): PassageKey {
   const sig = passage.key;
   const major = Note.transposeFifths("C", sig.fifths);
   const minor = Key.majorKey(major).minorRelative;
@@ -73,12 +86,32 @@ export function passageKey(passage: Pick<Passage, "key" | "sonorities">): Passag
     const low = s.notes[0]?.pitch;
     if (low) hist[((low.midi % 12) + 12) % 12] += total / 8;
   }
-  const majorFit = correlation(hist, MAJOR_PROFILE, Note.chroma(major)!);
-  let minorFit = correlation(hist, MINOR_PROFILE, Note.chroma(minor)!);
-  // The raised leading tone (G♯ in A minor) belongs to the minor key, not to its relative major.
-  const leading = Note.chroma(Key.minorKey(minor).harmonic.scale[6])!;
-  if (hist[leading] > 0) minorFit += 0.1;
-  return minorFit > majorFit + MARGIN ? { tonic: minor, mode: "minor", fifths: sig.fifths } : { tonic: major, mode: "major", fifths: sig.fifths };
+  // The signature's major and relative minor, then the keys one fifth either side (a passage
+  // that centres on the dominant or subdominant), which must fit clearly better to be chosen.
+  let best: { key: PassageKey; fit: number } | undefined;
+  const own = new Set(Scale.get(`${major} major`).notes.map((n) => Note.chroma(n)!));
+  // A neighbouring key needs a note of its own the signature lacks (G♯ for A minor under one sharp).
+  const evidence = (notes: readonly string[]) => notes.some((n) => !own.has(Note.chroma(n)!) && hist[Note.chroma(n)!] > 0);
+  for (const df of [0, 1, -1]) {
+    const fifths = sig.fifths + df;
+    if (Math.abs(fifths) > 7) continue;
+    const maj = Note.transposeFifths("C", fifths);
+    const min = Key.majorKey(maj).minorRelative;
+    const penalty = df === 0 ? 0 : NEIGHBOUR_MARGIN;
+    const majorFit = correlation(hist, MAJOR_PROFILE, Note.chroma(maj)!) - penalty;
+    // The raised leading tone (G♯ in A minor) belongs to the minor key, not to its relative major.
+    const leading = Note.chroma(Key.minorKey(min).harmonic.scale[6])!;
+    const minorFit = correlation(hist, MINOR_PROFILE, Note.chroma(min)!) + (hist[leading] > 0 ? 0.1 : 0) - MARGIN - penalty;
+    const candidates = [
+      { key: { tonic: maj, mode: "major" as const, fifths }, fit: majorFit, notes: Scale.get(`${maj} major`).notes },
+      { key: { tonic: min, mode: "minor" as const, fifths }, fit: minorFit, notes: Key.minorKey(min).harmonic.scale },
+    ];
+    for (const c of candidates) {
+      if (df !== 0 && !evidence(c.notes)) continue;
+      if (!best || c.fit > best.fit) best = { key: c.key, fit: c.fit };
+    }
+  }
+  return best?.key ?? marked;
 }
 
 /**

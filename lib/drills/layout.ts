@@ -156,6 +156,10 @@ function layHand(
     if (slot.marks !== undefined) extra.marks = slot.marks;
     if (slot.words !== undefined) extra.words = slot.words;
     if (slot.dynamic !== undefined) extra.dynamic = slot.dynamic;
+    // A chord takes one fermata, accent, word or dynamic (on its first note), as printed music does;
+    // a diamond head marks every key pressed silently.
+    const diamonds = slot.marks?.filter((m) => m === "diamond") ?? [];
+    const rest: typeof extra = diamonds.length ? { marks: diamonds } : {};
     pieces.forEach((p, i) => {
       const { measure } = p;
       const first = i === 0;
@@ -180,7 +184,7 @@ function layHand(
           ...(n.like ? { like: n.like } : {}),
           ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
           ...(chosen ? { fingering: chosen, fingeringSource: "drill" as const } : {}),
-          ...(first ? extra : {}),
+          ...(first ? (k === 0 ? extra : rest) : {}),
         };
         events.push(e);
       });

@@ -88,7 +88,7 @@ export function markText(quarterBpm: number, time: TimeSignature): string {
 
 /**
  * How a run of equal values sits in the meter: notes per beat (null when the value does not
- * divide the beat), and whether it moves in threes (three, six … notes per beat: eighths in 6/8,
+ * divide the beat), and whether it moves in threes (three notes per beat: eighths in 6/8,
  * triplet eighths in 2/4).
  *
  * @example
@@ -99,7 +99,8 @@ export function runFeel(value: Fraction, time: TimeSignature): { perBeat: number
   const n = beatLength(time).div(value);
   if (n.d !== 1n) return { perBeat: null, threes: false };
   const perBeat = Number(n.n);
-  return { perBeat, threes: perBeat % 3 === 0 };
+  // Six or twelve to the beat move in twos inside each third of the beat, not in threes.
+  return { perBeat, threes: perBeat === 3 };
 }
 
 /**

@@ -1,7 +1,8 @@
 import { describe, expect, test } from "vitest";
 import { makeContext } from "../build";
 import { drillText, makePassage } from "../test-passages";
-import { liftRests, liftRestsOptions } from "./lift-rests";
+import Fraction from "fraction.js";
+import { beatRests, liftRests, liftRestsOptions } from "./lift-rests";
 
 describe("lift-rests", () => {
   test("options parse with defaults", () => {
@@ -33,5 +34,12 @@ describe("lift-rests", () => {
     const { drills } = liftRests.generate(p, liftRestsOptions.parse({}), makeContext());
     // Hand-computed: the eighth lift is lengthened to a quarter so that each next group starts on its beat.
     expect(drillText(drills[0].score.events)).toEqual(["r:1/2", "C4:1/2", "r:1", "D4:1/2", "E4:1/2", "r:1", "F4:1", "r:1", "G4:1", "r:1"]);
+  });
+
+  test("a lift that starts inside a triplet beat completes the beat in triplet values, then plain ones (seen in the gallery)", () => {
+    // From 26/3 for 2 quarters in 2/2 (beat 2): 4/3 to the beat (a triplet half), then 2/3 (hand-computed).
+    const rests = beatRests(new Fraction(26, 3), new Fraction(2), new Fraction(2));
+    expect(rests.map((r) => [r.duration.toFraction(), r.tuplet?.actual ?? null])).toEqual([["4/3", 3], ["2/3", 3]]);
+    expect(beatRests(new Fraction(4), new Fraction(2), new Fraction(1)).map((r) => r.duration.toFraction())).toEqual(["2"]);
   });
 });

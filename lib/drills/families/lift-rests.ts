@@ -9,7 +9,8 @@ import { z } from "zod";
 import type { Passage, TimeSignature } from "../../score/types";
 import { isCompound } from "../meter";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
-import { barLength, buildDrill, passageHands, passageSlots, restSlot, type Slot } from "../build";
+import { barLength, buildDrill, passageHands, passageSlots, type Slot } from "../build";
+import { restOf } from "./shared-2-layout";
 import { beatLength, GROUP_BY, groupLength, groupSonorities, placeInBar } from "../groups";
 
 /** Rest lengths in quarter notes. */
@@ -37,6 +38,20 @@ export function alignUnit(length: Fraction, time: TimeSignature): Fraction {
 }
 
 /**
+ * A rest from `from` lasting `length`, split at the first beat boundary so that each piece is
+ * written in the values of its place (a triplet rest completes a triplet beat; whole beats are plain).
+ *
+ * @example
+ * beatRests(new Fraction(26, 3), new Fraction(2), new Fraction(2)).map((r) => r.duration.toFraction()); // ["4/3", "2/3"]
+ */
+export function beatRests(from: Fraction, length: Fraction, beat: Fraction): Slot[] {
+  const into = from.mod(beat);
+  const first = into.equals(0) ? length : beat.sub(into);
+  if (first.compare(length) >= 0) return [restOf(length)];
+  return [restOf(first), restOf(length.sub(first))];
+}
+
+/**
  * One drill per hand: each group as written, followed by a rest of the chosen length.
  *
  * @example
@@ -61,12 +76,15 @@ export function generateLiftRests(passage: Passage, options: LiftRestsOptions, c
       if (!next) return out;
       // The lift, lengthened so that the next group starts at its own place in the beat (in the
       // half bar or bar for a longer group), so its notes are written as in the score.
-      const unit = alignUnit(groupLength(next), passage.time);
+      // A group with a note tied over a barline keeps its place in the bar, so the tie stays where it was.
+      const overBar = next.some((x) => placeInBar(passage, x.onset).offset.mod(bar).add(x.duration).compare(bar) > 0);
+      const unit = overBar ? bar : alignUnit(groupLength(next), passage.time);
       const place = placeInBar(passage, next[0].onset).offset.mod(unit);
       const gap = place.sub(t.add(lift)).mod(unit).add(unit).mod(unit);
       const rest = lift.add(gap);
+      const rests = beatRests(t, rest, beatLength(passage.time));
       t = t.add(rest);
-      return [...out, restSlot(rest)];
+      return [...out, ...rests];
     });
     drills.push(
       buildDrill(

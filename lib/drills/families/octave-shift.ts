@@ -68,7 +68,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: OctaveShiftOptions, ctx:
     const warnings = reach < o.octaves ? [{ code: "range", message: `Only ${countOf(reach, "octave")} ${dir}: the keyboard ends there (A0–C8).` }] : [];
     drills.push(withClefChanges(buildDrill(passage, {
       family: "octave-shift", variant: dir, hands: hand, tempo: defaultTempo(passage), warnings,
-      title: `Group in octaves ${dir} and back`,
+      title: `Group in octaves ${dir} and back${passageHands(passage).length > 1 ? ` (${hand} hand)` : ""}`,
       teacherNote: "The same shape in another octave needs the arm to carry the hand there, so the fingers stop relying on one spot of the keyboard.",
       studentNote: `Play the group, then the same notes an octave ${dir === "up" ? "higher" : "lower"} each time, and back; let the arm move, keep the fingers' shape.`,
       segments: [{ [hand]: slots }],

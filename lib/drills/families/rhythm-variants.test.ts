@@ -68,14 +68,13 @@ describe("rhythm-variants", () => {
     expect(drillText(ls.score.events)).toEqual(["C4:3/4", "D4:1/4", "E4:3/4", "F4:1/4", "G4:1/2", "A4+C5:1/2", "B4:3/4", "C5:1/4"]);
   });
 
-  test("triplet runs are drillable: dotted inside each triplet beat, regrouped in plain eighths and sixteenths", () => {
+  test("triplet runs are drillable: regrouped in plain eighths and sixteenths, accented; no dotted figure inside a tuplet", () => {
     const p = makePassage({ time: { beats: 2, beatType: 4 }, right: "C4/8t D4/8t E4/8t F4/8t G4/8t A4/8t" });
-    const drills = rhythmVariants.generate(p, rhythmVariantsOptions.parse({ variants: ["long-short", "regroup"] }), makeContext()).drills;
-    expect(drills.map((d) => d.variant)).toEqual(["long-short", "duplets", "quadruplets"]);
-    expect(drillText(drills[0].score.events)).toEqual(["C4:1/2", "D4:1/6", "E4:1/3", "F4:1/2", "G4:1/6", "A4:1/3"]);
+    const drills = rhythmVariants.generate(p, rhythmVariantsOptions.parse({}), makeContext()).drills;
+    expect(drills.map((d) => d.variant)).toEqual(["duplets", "quadruplets", "accent-3", "accent-4"]);
     // Six eighths fill three beats; the second 2/4 bar is completed with a quarter rest.
-    expect(drillText(drills[1].score.events)).toEqual(["C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2", "G4:1/2", "A4:1/2", "r:1"]);
-    expect(drills[1].score.events.every((e) => e.written.tuplet === null)).toBe(true);
+    expect(drillText(drills[0].score.events)).toEqual(["C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2", "G4:1/2", "A4:1/2", "r:1"]);
+    expect(drills[0].score.events.every((e) => e.written.tuplet === null)).toBe(true);
   });
 
   test("no run of equal values: skipped with a reason", () => {

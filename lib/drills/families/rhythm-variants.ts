@@ -153,6 +153,12 @@ function regroupSlots(runs: Sonority[][], kind: "triplets" | "duplets" | "quadru
   });
 }
 
+/** Sounding length of a written sixteenth in this sonority's tuplet (1 when it has none). */
+function ratioScale(s: Sonority): Fraction {
+  const t = ratioOf(s);
+  return t ? new Fraction(t.normal, t.actual) : new Fraction(1);
+}
+
 /**
  * Dotted durations for the runs, kept inside the beat: pairs start on an even place of the beat
  * (of two beats for a run of one note per beat), three notes to a beat take the compound figure,
@@ -164,7 +170,12 @@ function dottedPlan(passage: Passage, runs: Sonority[][], order: "long-short" | 
   for (const run of runs) {
     const v = run[0].duration;
     const { perBeat } = runFeel(v, passage.time);
-    if (perBeat === null) continue;
+    // A dotted pair on anything shorter than a sixteenth would need 64ths (DRILL-RUBRIC 2: no invented values).
+    if (perBeat === null || v.compare(new Fraction(1, 4).mul(ratioScale(run[0]))) < 0) continue;
+    // Plain values only, in groupings a student reads (1, 2, 3, 4, 6 or 8 to the beat): a dotted
+    // figure inside a tuplet is hard to read and was misread in the gallery (pebble-study bars 1–2);
+    // tuplet runs are drilled by regrouping and accents instead.
+    if (ratioOf(run[0]) || ![1, 2, 3, 4, 6, 8].includes(perBeat)) continue;
     const unit = perBeat >= 2 ? beat : v.mul(2);
     const groups = new Map<string, Sonority[]>();
     for (const s of run) {

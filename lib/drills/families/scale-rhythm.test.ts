@@ -36,8 +36,9 @@ describe("scale-rhythm", () => {
     const [d] = scaleRhythm.generate(p, scaleRhythmOptions.parse({}), makeContext()).drills;
     const text = drillText(d.score.events);
     expect(text.slice(0, 4)).toEqual(["C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2"]);
-    // 29 eighths, then one eighth rest to end the beat, then rests to the end of the bar (16 quarters).
-    expect(text.slice(28, 30)).toEqual(["C4:1/2", "r:1/2"]);
+    // 29 eighths; the last tonic is held to the end of its beat (a quarter), then rests end the bar.
+    expect(text[28]).toBe("C4:1");
+    expect(text.slice(29).every((t) => t.startsWith("r:"))).toBe(true);
     const fingers = d.score.events.filter((e) => e.pitch).map((e) => e.fingering?.[0].finger);
     expect(fingers.slice(0, 8)).toEqual([1, 2, 3, 1, 2, 3, 4, 1]);
     expect(fingers[14]).toBe(5);

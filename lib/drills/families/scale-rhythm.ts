@@ -9,7 +9,7 @@ import { Scale } from "tonal";
 import { z } from "zod";
 import type { Hand, Passage } from "../../score/types";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
-import { buildDrill, passageHands, restSlot, type Slot } from "../build";
+import { buildDrill, passageHands, type Slot } from "../build";
 import { beatLength, groupSonorities, placeInBar } from "../groups";
 import { asSignature, keyLabel, MINOR_FORMS, passageKey, writableForm } from "../key-mode";
 import { barCap, firstWithin } from "../length";
@@ -100,7 +100,16 @@ function scaleSlots(passage: Passage, hand: Hand, pattern: BeatPattern, options:
       ...(tuplet ? { tuplet } : {}),
     });
   }
-  for (; k % pattern.durations.length !== 0; k++) slots.push(restSlot(pattern.durations[k % pattern.durations.length], tuplet));
+  // The last tonic is held to the end of its beat (a scale ends on a long tonic, common practice),
+  // rather than followed by a string of short rests.
+  let hold = new Fraction(0);
+  for (; k % pattern.durations.length !== 0; k++) hold = hold.add(pattern.durations[k % pattern.durations.length]);
+  const last = slots[slots.length - 1];
+  if (last && hold.compare(0) > 0) {
+    const duration = last.duration.add(hold);
+    const { tuplet: _drop, ...plain } = last;
+    slots[slots.length - 1] = duration.d === 1n || [2n, 4n, 8n, 16n, 32n].includes(duration.d) ? { ...plain, duration } : { ...last, duration };
+  }
   return slots;
 }
 

@@ -49,10 +49,14 @@ describe("sequence", () => {
   });
 
   test("stops at the top of the keyboard with a warning (C8 = 108, FACTS.md §1)", () => {
-    const high = makePassage({ right: "G7/8 B7/8" });
+    const high = makePassage({ right: "E7/8 G7/8" });
     const d = generateSequence(high, sequenceOptions.parse({ steps: 2, mirror: false }), ctx).drills[0];
-    expect(names(d, 1)).toEqual(["G7", "B7"]);
-    expect(d.warnings.some((w) => w.code === "range")).toBe(true);
+    expect(names(d, 1)).toEqual(["E7", "G7", "G7", "B7"]);
+    expect(d.warnings.some((w) => w.code === "range" && w.message.startsWith("Stopped after 2 repetitions"))).toBe(true);
+    // A figure that cannot move at all writes no "sequence" of one statement: the family says why.
+    const top = generateSequence(makePassage({ right: "G7/8 B7/8" }), sequenceOptions.parse({ steps: 2, mirror: false }), ctx);
+    expect(top.drills).toEqual([]);
+    expect(top.skipped).toMatch(/can move/);
   });
 
   // Minor keys move through the harmonic minor (its leading tone is a scale note; common practice).

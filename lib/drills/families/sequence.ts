@@ -91,7 +91,19 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     let fits = true;
     try {
       main = sons.map((s) => s.notes.map((n) => movePitch(n.pitch!, k, o, key, form)));
-      mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key, form)));
+      if (k === 0 && withMirror) {
+        try {
+          mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key, form)));
+        } catch {
+          mirror = [];
+        }
+        if (!mirror.length || !onPiano(mirror.flat())) {
+          // The figure upside down an octave away leaves the keyboard: the sequence goes on alone.
+          withMirror = false;
+          warnings.push({ code: "range", message: "No mirror: upside down, the figure leaves the keyboard (A0–C8)." });
+        }
+      }
+      if (withMirror) mirror = main.map((ps) => ps.map((p) => mirrorPitch(axis, p, target, o, key, form)));
       fits = onPiano([...main.flat(), ...(withMirror ? mirror.flat() : [])]);
     } catch {
       fits = false; // far off the keyboard: tonal cannot even name the note
@@ -125,7 +137,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     const base = { family: "sequence", tempo: defaultTempo(passage), warnings: [...warnings, ...extra] };
     const out = [
       buildDrill(passage, {
-        ...base, variant: "sequence", hands: hand, title: `Figure moved ${up} by ${motion}`,
+        ...base, variant: "sequence", hands: hand, title: `Figure moved ${up} by ${motion}${passageHands(passage).length > 1 ? ` (${hand} hand)` : ""}`,
         teacherNote: "Moving the figure through the key keeps its shape while the keys under the fingers change, so the hand learns the shape, not one set of keys.",
         studentNote: `Play the figure, then again ${motion} ${up}, keeping the same fingering shape and a steady pulse.`,
         segments: [{ [hand]: [...slotsOf("main", n), ...(n ? [] : [restOf(durations[0])])] }],
@@ -133,7 +145,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     ];
     if (withMirror) {
       out.push(buildDrill(passage, {
-        ...base, variant: "mirror", hands: "both", title: "Figure with its mirror in the other hand",
+        ...base, variant: "mirror", hands: "both", title: `Figure with its mirror in the other hand${passageHands(passage).length > 1 ? ` (${hand} hand leads)` : ""}`,
         teacherNote: "In contrary motion both hands use the same fingers at the same moment, which makes the fingering easy to learn and to check.",
         studentNote: `The ${other} hand plays the figure upside down while the ${hand} hand plays it as written; match the fingers of both hands.`,
         segments: [{ [hand]: slotsOf("main", n), [other]: slotsOf("mirror", n) }],
@@ -141,6 +153,8 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     }
     return out;
   };
+  // A "sequence" that never moves is no sequence (DRILL-RUBRIC sequence: a moved figure must move).
+  if (reps.length < 2) return [];
   let drills = make(reps.length, []);
   if (!ctx.safety || reps.length <= 1) return drills;
   // With fingering, a moved chord can be over the profile even when its bare span is not:
@@ -150,7 +164,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
     n--;
     drills = make(n, [{ code: "span", message: `Stopped after ${countOf(n, "repetition")}: the next one stretches past the hand profile.` }]);
   }
-  return drills;
+  return n < 2 ? [] : drills;
 }
 
 /**
@@ -159,7 +173,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: SequenceOptions, ctx: Dr
  */
 export function generateSequence(passage: Passage, options: SequenceOptions, ctx: DrillContext): FamilyResult {
   const drills = passageHands(passage).flatMap((h) => drillsForHand(passage, h, options, ctx));
-  return drills.length ? { drills } : { drills: [], skipped: "the passage has no figure of two or more notes" };
+  return drills.length ? { drills } : { drills: [], skipped: "No figure of two or more notes that can move a step and stay on the keyboard and within the hand." };
 }
 
 /** The `sequence` family for the registry. */

@@ -23,4 +23,12 @@ describe("stops", () => {
     expect(r.drills).toHaveLength(0);
     expect(r.skipped).toMatch(/single note/);
   });
+
+  test("a chord takes one fermata, not one per note (seen in the gallery; common practice)", () => {
+    const p = makePassage({ right: "[C4,E4,G4]/8 D4/8 E4/8 F4/8 G4/2" });
+    const [d] = stops.generate(p, stopsOptions.parse({}), makeContext()).drills;
+    const chord = d.score.events.filter((e) => e.onset.equals(0));
+    expect(chord).toHaveLength(3);
+    expect(chord.filter((e) => e.marks?.includes("fermata"))).toHaveLength(1);
+  });
 });

@@ -102,6 +102,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
   const value = VALUES[o.value];
   const cap = barCap(passage, ctx);
   const base = { family: "thumb-pairs", hands: hand, tempo: defaultTempo(passage) };
+  const tag = passageHands(passage).length > 1 ? ` (${hand} hand)` : "";
   const upAndDown = (octaves: number) => onKeyboard([...scaleNotes(scale, 0, 7 * octaves), ...scaleNotes(down, 7 * octaves - 1, 0)]);
   if (!upAndDown(o.octaves)) return [];
   const octaveChoices = Array.from({ length: o.octaves }, (_, i) => o.octaves - i);
@@ -109,7 +110,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
     firstWithin(cap, octaveChoices.map((n) => () => {
       const names = upAndDown(n) ?? [];
       return buildDrill(passage, {
-        ...base, variant: `thumb-and-${k}`, title: `Scale with thumb and ${k}`,
+        ...base, variant: `thumb-and-${k}`, title: `Scale with thumb and ${k}${tag}`,
         teacherNote: "With only two fingers, the thumb has to pass on every other note; a smooth result shows a free thumb and a quiet arm.",
         studentNote: `Play the scale up and down using only the thumb and finger ${k} in turn; keep the line smooth and the elbow still.`,
         segments: [{ [hand]: slotsOf(names, pairFingers(names.length, k, hand), value) }],
@@ -124,7 +125,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
     const side = starts.flatMap((s) => scaleNotes(scale, s, s + 4).concat(scaleNotes(scale, s + 3, s + 1)));
     const sideFingers = starts.flatMap(() => up);
     return buildDrill(passage, {
-      ...base, variant: "five-finger-sideways", title: "Five-finger pattern moving sideways",
+      ...base, variant: "five-finger-sideways", title: `Five-finger pattern moving sideways${tag}`,
       teacherNote: "Moving a fixed hand shape one key at a time trains the lateral move without any thumb passing.",
       studentNote: "Play the five-finger pattern up and back, then move the whole hand one key over; keep the shape of the hand the same.",
       segments: [{ [hand]: slotsOf(onKeyboard([...side, scaleNotes(scale, 0, 0)[0]]) ?? [], [...sideFingers, hand === "right" ? 1 : 5], value) }],
@@ -145,7 +146,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: ThumbPairsOptions, ctx: 
       scaleNotes(scale, start, dir * top).forEach((n, i) => cells.push({ name: n, finger: i + 1 }));
     }
     return buildDrill(passage, {
-      ...base, variant: `thumb-takes-${k}`, title: `Thumb takes over finger ${k}`,
+      ...base, variant: `thumb-takes-${k}`, title: `Thumb takes over finger ${k}${tag}`,
       teacherNote: "Taking a note over with the thumb moves the hand into the next position without a gap or a bump.",
       studentNote: `Play fingers 1 to ${k} on the scale; the thumb then plays the same key finger ${k} just played, and the hand carries on from there.`,
       segments: [{ [hand]: slotsOf(onKeyboard(cells.map((c) => c.name)) ?? [], cells.map((c) => c.finger), value) }],
