@@ -35,7 +35,13 @@ const nextConfig: NextConfig = {
   distDir: process.env.KNOTWORK_DIST_DIR || ".next",
   serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],
   // forbidden() + app/forbidden.tsx: a student opening a teacher page gets a real 403.
-  experimental: { authInterrupts: true },
+  experimental: {
+    authInterrupts: true,
+    // With proxy.ts on every path, Next copies each request body for it, up to this size (default 10 MB),
+    // before any handler runs. Just above the upload cap (5 MB + 64 KB): a larger body is cut there and
+    // the upload handler answers 413 (lib/limits/body.ts).
+    proxyClientMaxBodySize: "6mb",
+  },
   // `npm test` type-checks the whole project once with tsc; the build does not repeat it.
   typescript: { ignoreBuildErrors: true },
   async headers() {

@@ -16,6 +16,8 @@ declare module "vitest" {
     seedIds: string;
     /** JSON of Cookies. */
     cookies: string;
+    /** Process id of the `next start` child (its RSS is measured by the memory tests). */
+    serverPid: number;
   }
 }
 
@@ -59,6 +61,7 @@ export default async function setup(project: TestProject) {
   project.provide("uploadsDir", uploadsDir);
   project.provide("seedIds", fs.readFileSync(idsFile, "utf8"));
   project.provide("cookies", JSON.stringify(cookies));
+  project.provide("serverPid", child.pid ?? 0);
 
   return async () => {
     await stopServer(child);

@@ -29,7 +29,10 @@ export async function POST(request: Request) {
     // Read at most the cap (plus room for the form's own parts), chunked bodies included.
     form = await readFormCapped(request, MAX_UPLOAD_BYTES + 64 * 1024);
   } catch (err) {
-    if (err instanceof BodyTooLargeError) return NextResponse.json({ error: "The file is larger than 5 MB.", field: "file" }, { status: 413 });
+    if (err instanceof BodyTooLargeError) {
+      // Connection: close, so the server stops reading the rest of an oversize body once it has answered.
+      return NextResponse.json({ error: "The file is larger than 5 MB.", field: "file" }, { status: 413, headers: { connection: "close" } });
+    }
     return NextResponse.json({ error: "The upload was cut off or malformed; please try again.", field: "file" }, { status: 400 });
   }
   const outcome = await acceptUpload(form, auth.upload);
