@@ -9,7 +9,7 @@ import { FONT, handoutFontPath, registerHandoutFonts } from "./fonts";
 import { HandoutInputSchema, PAGE_SIZE_PT, type HandoutInput } from "./input";
 import { contentBottom, drawFooters, drawRunningHeader, drawSheetHeader } from "./page-chrome";
 import { STYLE } from "./page-style";
-import { engravedDrillSvg } from "../jobs/engraving-cache";
+import { engravedDrillSvg } from "./engraving-cache";
 import { svgSize } from "./svg-size";
 
 /** Engraving width in px; at A4's column (≈ 487 pt) a staff is ≈ 7 mm high, a usual print size. */

@@ -1,11 +1,11 @@
 /**
  * Whole handout PDFs kept by content: the same sheet, paper, names, date and goals give the same PDF,
  * so a second request is a hash and a look-up instead of engraving and laying out every drill again.
- * (The drills inside are engraved through lib/jobs/engraving-cache.ts.)
+ * (The drills inside are engraved through lib/handout/engraving-cache.ts.)
  */
 import { renderHandoutPdf } from "../handout/render-handout-pdf";
 import type { HandoutInput } from "../handout/input";
-import { contentCache } from "./content-cache";
+import { contentCache } from "../handout/content-cache";
 import { heavyWork } from "./gate";
 
 // A cached handout is answered at once; a new one waits its turn in the bounded queue (lib/jobs/gate.ts).

@@ -1,7 +1,7 @@
 // Handouts and engraved drills are kept by content: the second request for the same handout is
 // byte-for-byte the first and costs no engraving; a copy for another student reuses every drill.
 import { describe, expect, test } from "vitest";
-import { engravingCacheStats } from "@/lib/jobs/engraving-cache";
+import { engravingCacheStats } from "@/lib/handout/engraving-cache";
 import { handoutCacheStats, handoutPdf } from "@/lib/jobs/render-cache";
 import { eightDrillSheet } from "./sample-sheet";
 

@@ -3,7 +3,7 @@
  * the same width is engraved once per process. A student copy of a sheet already printed for another
  * student reuses every drill's engraving.
  */
-import { renderDrillSvg } from "../handout/render-drill-svg";
+import { renderDrillSvg } from "./render-drill-svg";
 import { contentCache } from "./content-cache";
 
 const svgs = contentCache("drill-svg", (i: { musicxml: string; widthPx: number }) => renderDrillSvg(i.musicxml, { widthPx: i.widthPx }), {
