@@ -27,7 +27,7 @@ describe("drill registry", () => {
   });
 
   test("generateDrills runs the chosen families and lists the ones that do not apply, with a reason", () => {
-    const p = makePassage({ right: "C4/4 D4/4 E4/4 F4/4" });
+    const p = makePassage({ right: "C4/4 E4/4 G4/4 C5/4" });
     const { drills, skipped } = generateDrills(p, { families: ["blocking", "pivot-walk", "no-such-family"] });
     expect(drills.length).toBeGreaterThan(0);
     expect(drills.every((d) => d.family === "blocking")).toBe(true);
