@@ -238,8 +238,10 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const onsetKey = Float64Array.from(laid, (e) => e.onset.valueOf());
   const staffKey = Int8Array.from(laid, (e) => staffOf(e.hand));
   const pitchKey = Int16Array.from(laid, (e) => e.pitch?.midi ?? -1);
+  // Grace notes come before the note they ornament, in the order written.
+  const graceKey = Int8Array.from(laid, (e) => (e.grace ? 0 : 1));
   const order = Array.from(laid, (_, i) => i).sort(
-    (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || pitchKey[a]! - pitchKey[b]!,
+    (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || graceKey[a]! - graceKey[b]! || (graceKey[a] ? pitchKey[a]! - pitchKey[b]! : 0),
   );
   const ordered = order.map((i) => laid[i]!);
   const memo = ctx.fingeringMemo ?? newFingeringMemo();

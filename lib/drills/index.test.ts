@@ -8,6 +8,8 @@ import { PROBLEM_TAGS } from "./types";
 const IDS = [
   "blocking", "note-pairs", "rhythm-variants", "stops", "lift-rests", "scale-rhythm", "pivot-walk",
   "voice-isolation", "doubles", "octave-shift", "held-tone", "sequence", "thumb-pairs", "tempo-ladder",
+  // Techniques a complete lesson uses (DRILL-RUBRIC.md): chaining, octave doubling, grace notes slowed.
+  "chaining", "octave-doubling", "ornaments",
 ];
 
 describe("drill registry", () => {

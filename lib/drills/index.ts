@@ -8,6 +8,9 @@ import { makeContext } from "./build";
 import { newFingeringMemo } from "./span";
 import { withLightEndings } from "./groups-option";
 import { blocking } from "./families/blocking";
+import { chaining } from "./families/chaining";
+import { octaveDoubling } from "./families/octave-doubling";
+import { ornaments } from "./families/ornaments";
 import { doubles } from "./families/doubles";
 import { heldTone } from "./families/held-tone";
 import { liftRests } from "./families/lift-rests";
@@ -43,6 +46,7 @@ export const families: Readonly<Record<string, DrillFamily>> = Object.fromEntrie
     [
       blocking, notePairs, rhythmVariants, stops, liftRests, scaleRhythm, pivotWalk,
       voiceIsolation, doubles, octaveShift, heldTone, sequence, thumbPairs, tempoLadder,
+      chaining, octaveDoubling, ornaments,
     ] as DrillFamily[]
   ).map((f) => [f.id, f]),
 );

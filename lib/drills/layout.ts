@@ -31,6 +31,8 @@ export interface Slot {
   readonly marks?: readonly NoteMark[];
   readonly words?: string;
   readonly dynamic?: string;
+  /** Grace notes written just before this slot's notes (no time of their own). */
+  readonly grace?: readonly SlotNote[];
 }
 
 /** A stretch of drill music that starts on a new bar; both hands run side by side. */
@@ -159,6 +161,17 @@ function layHand(
     pieces.forEach((p, i) => {
       const { measure } = p;
       const first = i === 0;
+      if (first && slot.grace) {
+        for (const g of slot.grace) {
+          const written = { type: g.source?.written.type ?? "eighth", dots: 0, tuplet: null };
+          const fromScore = g.source?.fingering?.length ? g.source.fingering : undefined;
+          events.push({
+            hand, measure, onset: p.onset, duration: new Fraction(0), written, pitch: g.pitch, chord: false, tie: "none", grace: true,
+            ...(g.source ? { source: g.source } : {}),
+            ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
+          });
+        }
+      }
       const tie = pieces.length === 1 ? "none" : first ? "start" : i === pieces.length - 1 ? "stop" : "continue";
       if (sorted.length === 0) {
         events.push({ hand, measure, onset: p.onset, duration: p.duration, written: p.written, pitch: null, chord: false, tie: "none", ...(first ? extra : {}) });
