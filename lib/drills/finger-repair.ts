@@ -49,7 +49,8 @@ export function repairFingering(events: readonly NoteEvent[], handOf: (e: NoteEv
  * repairWithReport(events, () => "right").unsettled // 0 when every moment can be played
  */
 export function repairWithReport(events: readonly NoteEvent[], handOf: (e: NoteEvent) => Hand): { events: NoteEvent[]; unsettled: number } {
-  const out = events.map((e) => ({ ...e }) as Mutable);
+  // Events are copied only where a finger changes.
+  const out = events.slice() as Mutable[];
   let unsettled = 0;
   for (const hand of ["right", "left"] as const) {
     const idx = out.map((_, i) => i).filter((i) => handOf(out[i]!) === hand && !out[i]!.grace);
@@ -135,10 +136,7 @@ function repairHand(out: Mutable[], idx: number[], hand: Hand): number {
       if (s.fixed || s.finger == null) continue;
       for (const i of s.members) {
         const e = out[i]!;
-        if (fingerOf(e) !== s.finger) {
-          e.fingering = [{ finger: s.finger }];
-          e.fingeringSource = "estimated";
-        }
+        if (fingerOf(e) !== s.finger) out[i] = { ...e, fingering: [{ finger: s.finger }], fingeringSource: "estimated" };
       }
     }
   }
