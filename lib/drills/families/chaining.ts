@@ -7,14 +7,15 @@
 import Fraction from "fraction.js";
 import { z } from "zod";
 import type { Hand, Passage, Sonority } from "../../score/types";
-import { buildDrill, noteOf, passageHands, restSlot, type Slot } from "../build";
+import { barLength, buildDrill, noteOf, passageHands, restSlot, type Slot } from "../build";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 
 const VALUES = { "16th": new Fraction(1, 4), eighth: new Fraction(1, 2), quarter: new Fraction(1) } as const;
 
 /** Options: notes per link, times each link is played, its note value, and most links per drill. */
 export const chainingOptions = z.object({
-  size: z.union([z.literal(3), z.literal(4)]).default(4),
+  /** Notes per link; "auto" takes 3 in compound meters (they move in threes) and 4 otherwise. */
+  size: z.union([z.literal(3), z.literal(4), z.literal("auto")]).default("auto"),
   repeats: z.number().int().min(1).max(4).default(2),
   value: z.enum(["16th", "eighth", "quarter"]).default("eighth"),
   maxLinks: z.number().int().min(1).max(16).default(6),
@@ -36,24 +37,40 @@ export function chainLinks(count: number, size: number): [number, number][] {
   return links;
 }
 
-function drillForHand(passage: Passage, hand: Hand, o: ChainingOptions, ctx: DrillContext): Drill | null {
+/** Notes per link for a passage: the option, or 3 in compound meters and 4 otherwise. */
+function linkSize(passage: Passage, o: ChainingOptions): 3 | 4 {
+  if (o.size !== "auto") return o.size;
+  const { beats, beatType } = passage.time;
+  return beatType >= 8 && beats % 3 === 0 && beats > 3 ? 3 : 4;
+}
+
+function drillForHand(passage: Passage, hand: Hand, opts: ChainingOptions, ctx: DrillContext): Drill | null {
+  const o = { ...opts, size: linkSize(passage, opts) };
   const sons: Sonority[] = passage.sonorities[hand].filter((s, i, all) => i === 0 || s.notes.map((n) => n.pitch!.midi).join() !== all[i - 1]!.notes.map((n) => n.pitch!.midi).join());
   if (sons.length < o.size + 1) return null;
   const links = chainLinks(sons.length, o.size).slice(0, o.maxLinks);
   const v = VALUES[o.value];
-  const slots: Slot[] = links.flatMap(([a, b]) => {
+  // Each link starts on a bar line and never crosses one: after its repeats a rest fills the bar;
+  // when the link fills the bar exactly, its last note carries a pause (fermata) instead.
+  const bar = barLength(passage.time);
+  const slots: Slot[] = [];
+  let t = new Fraction(0);
+  for (const [a, b] of links) {
     const link = sons.slice(a, b);
-    const cell: Slot[] = [];
-    for (let r = 0; r < o.repeats; r++) for (const s of link) cell.push({ duration: v, notes: s.notes.map(noteOf) });
-    return [...cell, restSlot(v.mul(2))];
-  });
+    for (let r = 0; r < o.repeats; r++) for (const s of link) slots.push({ duration: v, notes: s.notes.map(noteOf) });
+    t = t.add(v.mul(link.length * o.repeats));
+    const left = bar.sub(t.mod(bar)).mod(bar);
+    if (left.compare(0) > 0) slots.push(restSlot(left));
+    else slots[slots.length - 1] = { ...slots[slots.length - 1]!, marks: ["fermata"] };
+    t = t.add(left);
+  }
   const shown = links.length < chainLinks(sons.length, o.size).length ? " (the first links)" : "";
   return buildDrill(passage, {
     family: "chaining",
     variant: `links-of-${o.size}`,
     title: `Chaining in links of ${o.size} notes${shown}`,
     teacherNote: `Each link of ${o.size} notes starts on the last note of the one before, so every join of the run is practised inside a group.`,
-    studentNote: `Play each link evenly ${o.repeats === 1 ? "once" : o.repeats === 2 ? "twice" : `${o.repeats} times`}, then rest and prepare the next link over its first note, which is the note you just played.`,
+    studentNote: `Play each link evenly ${o.repeats === 1 ? "once" : o.repeats === 2 ? "twice" : `${o.repeats} times`}, then rest (or pause) and prepare the next link over its first note, which is the note you just played.`,
     hands: hand,
     segments: [{ [hand]: slots }],
   }, ctx);
@@ -67,7 +84,7 @@ function drillForHand(passage: Passage, hand: Hand, o: ChainingOptions, ctx: Dri
  */
 export function generateChaining(passage: Passage, options: ChainingOptions, ctx: DrillContext): FamilyResult {
   const drills = passageHands(passage).map((h) => drillForHand(passage, h, options, ctx)).filter((d): d is Drill => d !== null);
-  return drills.length ? { drills } : { drills: [], skipped: `The passage has no run longer than ${options.size} notes to chain.` };
+  return drills.length ? { drills } : { drills: [], skipped: `The passage has no run longer than ${linkSize(passage, options)} notes to chain.` };
 }
 
 /** The `chaining` family for the registry. */
