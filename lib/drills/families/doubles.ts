@@ -34,7 +34,9 @@ type Who = "upper" | "lower";
 
 function voiceSlots(steps: readonly Sonority[], who: Who, repeating: boolean, o: DoublesOptions): Slot[] {
   const value = VALUES[o.value];
-  const loud = o.dynamics ? (repeating ? "f" : "p") : undefined;
+  // Only the repeating (louder) voice carries a dynamic: both voices start together, and two
+  // dynamics at one moment would stack under the note (the holding voice is marked soft in words).
+  const loud = o.dynamics && repeating ? "f" : undefined;
   return steps.flatMap((s, i) => {
     const n = noteOf(s.notes[who === "upper" ? 1 : 0]);
     const dyn = i === 0 && loud ? { dynamic: loud } : {};

@@ -125,7 +125,8 @@ function drillsForHand(passage: Passage, hand: Hand, o: VoiceIsolationOptions, c
     }, ctx));
   }
   // Two lines together: the top line sung out over the lower one, the inner notes left out; where
-  // both lines have the same key at the same time it is written once (no unison duplicates).
+  // both lines have the same key at the same time it is written once (no unison duplicates). The
+  // lower line's "p" is left out where it would stack under the top line's "mf" at the same moment.
   const same = (a: TimedItem, b: TimedItem) => a.onset.equals(b.onset) && a.notes[0]?.pitch.midi === b.notes[0]?.pitch.midi;
   const lowerOnly = lines.lower.filter((l) => !lines.top.some((t) => same(t, l)));
   const together = lowerOnly.length ? buildVoicedDrill(passage, {
@@ -133,7 +134,7 @@ function drillsForHand(passage: Passage, hand: Hand, o: VoiceIsolationOptions, c
     title: "Top and lower lines together",
     teacherNote: "With the inner notes left out, the student can balance the melody against the bass line before adding the middle.",
     studentNote: `Play the top and the lower line of the ${hand} hand together; the top line louder, the lower line soft and connected.`,
-  }, hand, timelineSlots(lines.top.map((i, k) => (k === 0 ? { ...i, dynamic: "mf" } : i)), origin, end), timelineSlots(lowerOnly.map((i, k) => (k === 0 ? { ...i, dynamic: "p" } : i)), origin, end), ctx) : null;
+  }, hand, timelineSlots(lines.top.map((i, k) => (k === 0 ? { ...i, dynamic: "mf" } : i)), origin, end), timelineSlots(lowerOnly.map((i, k) => (k === 0 && !i.onset.equals(lines.top[0]!.onset) ? { ...i, dynamic: "p" } : i)), origin, end), ctx) : null;
   // Left out when the printed fingering gives a held key's finger to a moving note.
   if (together && !together.warnings.some((w) => w.code === "fingering")) drills.push(together);
   return drills;
