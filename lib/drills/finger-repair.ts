@@ -7,7 +7,7 @@
  *   chord, no left-hand thumb below a held key, a held note and a moving note never share a finger);
  * - a held note keeps its finger; unison notes share the one finger their key can take;
  * - the same finger never plays two different keys a step or a third apart (1–4 semitones), note
- *   after note with no rest between, within one line.
+ *   after note with no rest between, within one line; a key struck again keeps its finger.
  * Only estimated fingers change; fingerings printed in the score or prescribed by the drill stay.
  */
 import type { Hand, NoteEvent } from "../score/types";
@@ -124,6 +124,15 @@ function repairHand(out: Mutable[], idx: number[], hand: Hand): number {
           const f = free.sort((a, b) => Math.abs(a - prev.finger!) - Math.abs(b - prev.finger!))[0];
           if (f !== undefined) [prev.finger, changed] = [f, true];
         }
+      }
+      // A key struck again in its line keeps the finger it had, where the held keys allow it.
+      for (const s of list) {
+        const prev = lineOf.get(s)?.prev;
+        if (s.fixed || !prev || prev.midi !== s.midi || prev.finger == null || prev.finger === s.finger) continue;
+        const was = s.finger;
+        s.finger = prev.finger;
+        if (!orderedOk([...held, ...list].sort((a, b) => a.midi - b.midi).map((x) => x.finger), hand)) s.finger = was;
+        else changed = true;
       }
       if (settled(held, list, hand, lineOf)) return;
       changed = solve([...held, ...list], held, list, hand, lineOf) || changed;

@@ -193,7 +193,8 @@ function layHand(
           ...(n.like ? { like: n.like } : {}),
           ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
           ...(chosen ? { fingering: chosen, fingeringSource: "drill" as const } : {}),
-          ...(first ? extra : {}),
+          // Words and a dynamic are written once per chord (on its lowest note), marks on every note.
+          ...(first ? (k === 0 ? extra : extra.marks ? { marks: extra.marks } : {}) : {}),
         };
         events.push(e);
       });
