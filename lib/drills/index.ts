@@ -6,7 +6,7 @@ import type { Passage } from "../score/types";
 import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
 import { newFingeringMemo } from "./span";
-import { withLightEndings } from "./groups-option";
+import { withEndings, type Endings } from "./groups-option";
 import { blocking } from "./families/blocking";
 import { chaining } from "./families/chaining";
 import { octaveDoubling } from "./families/octave-doubling";
@@ -33,7 +33,7 @@ export { makeContext } from "./build";
 export { estimateFingering } from "./fingering";
 export { DEFAULT_PROFILE, keyDistanceMm, profileFromInches, spanOf } from "./hand";
 export { difficultyMap, hardestBars } from "./difficulty";
-export { applyLightEndings, lightEndingsOption } from "./groups-option";
+export { applyLightEndings, ENDINGS, lightEndingsOption, withEndings, type Endings } from "./groups-option";
 
 /**
  * Every drill family by id, in the order a teacher sees them.
@@ -62,6 +62,11 @@ export interface GenerateOptions {
   readonly safety?: boolean;
   /** End each group lightly: a long note after shorter ones is cut short and lifted (default false). */
   readonly lightEndings?: boolean;
+  /**
+   * Group endings: "written" (default), "short" (as `lightEndings`), or "short-and-long": each drill
+   * with long endings twice, short and light first, then long as written for contrast.
+   */
+  readonly endings?: Endings;
 }
 
 export interface GenerateResult {
@@ -85,6 +90,7 @@ function hashId(id: string): number {
  * @example
  * const { drills, skipped } = generateDrills(passage, { families: ["blocking"], seed: 3 });
  * generateDrills(passage, { families: ["stops"], lightEndings: true }); // groups end short and light
+ * generateDrills(passage, { families: ["stops"], endings: "short-and-long" }); // short, then long as contrast
  */
 export function generateDrills(passage: Passage, opts: GenerateOptions = {}): GenerateResult {
   const ids = opts.families ?? Object.keys(families);
@@ -100,7 +106,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     const options = family.options.parse(opts.options?.[id] ?? {});
     const ctx = makeContext({ profile: opts.profile, seed: ((opts.seed ?? 1) ^ hashId(id)) >>> 0, safety: opts.safety, fingeringMemo });
     const result = family.generate(passage, options, ctx);
-    drills.push(...withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }));
+    drills.push(...withEndings(result.drills, opts.endings ?? (opts.lightEndings ? "short" : "written")));
     if (result.drills.length === 0) skipped.push({ family: id, reason: result.skipped ?? "No drill of this family fits the passage." });
   }
   return { drills, skipped };
