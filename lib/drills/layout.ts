@@ -142,6 +142,16 @@ function piecesExact(slots: readonly Slot[], start: Fraction, bar: Fraction): { 
   return { pieces: out, end: t };
 }
 
+/** The slot's notes low to high, one per key (a printed finger's note kept over a bare one). */
+function oneNotePerKey(notes: readonly SlotNote[]): SlotNote[] {
+  const byKey = new Map<number, SlotNote>();
+  for (const n of notes) {
+    const had = byKey.get(n.pitch.midi);
+    if (!had || (!had.source?.fingering?.length && n.source?.fingering?.length)) byKey.set(n.pitch.midi, n);
+  }
+  return [...byKey.values()].sort((a, b) => a.pitch.midi - b.pitch.midi);
+}
+
 /** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
 function layHand(
   hand: Hand,
@@ -153,7 +163,9 @@ function layHand(
   const events: LaidEvent[] = [];
   slots.forEach((slot, s) => {
     const pieces = all[s]!;
-    const sorted = slot.notes.length > 1 ? [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi) : slot.notes;
+    // One hand plays a key once: a unison of two voices in one slot is written as one note (the
+    // one with a printed finger, if any), never as two noteheads with one finger.
+    const sorted = slot.notes.length > 1 ? oneNotePerKey(slot.notes) : slot.notes;
     const extra: { marks?: readonly NoteMark[]; words?: string; dynamic?: string } = {};
     if (slot.marks !== undefined) extra.marks = slot.marks;
     if (slot.words !== undefined) extra.words = slot.words;

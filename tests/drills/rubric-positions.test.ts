@@ -170,6 +170,16 @@ describe("hand positions and fingering on real scores (DRILL-RUBRIC.md)", () => 
     expect(bad, report(bad)).toEqual([]);
   });
 
+  // Rubric: "a unison is not two notes with one finger" (issue #17; common practice): one key, one note.
+  test("no chord writes the same key twice", () => {
+    const bad: string[] = [];
+    for (const r of runs) for (const c of chordsOf(r.drill)) {
+      const keys = c.map((e) => e.pitch!.midi);
+      if (new Set(keys).size < keys.length) bad.push(`${r.name}: ${keys.join(",")}`);
+    }
+    expect(bad, report(bad)).toEqual([]);
+  });
+
   // Rubric: held notes keep their finger, and a held note and a moving note never share a finger;
   // the left-hand thumb never below a key the hand holds (common practice).
   test("held notes keep their finger and no struck note borrows it", () => {

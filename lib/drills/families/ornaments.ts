@@ -80,7 +80,9 @@ function drillForHand(passage: Passage, hand: Hand, o: OrnamentsOptions, ctx: Dr
  */
 export function generateOrnaments(passage: Passage, options: OrnamentsOptions, ctx: DrillContext): FamilyResult {
   const drills = passageHands(passage).map((h) => drillForHand(passage, h, options, ctx)).filter((d): d is Drill => d !== null);
-  return drills.length ? { drills } : { drills: [], skipped: "The passage has no grace notes to slow down." };
+  if (drills.length) return { drills };
+  const any = passage.events.some((e) => e.grace && e.pitch);
+  return { drills: [], skipped: any ? "The grace notes lead to a note on the other staff, so one hand has nothing to slow down." : "The passage has no grace notes to slow down." };
 }
 
 /** The `ornaments` family for the registry. */
