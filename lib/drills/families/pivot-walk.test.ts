@@ -65,4 +65,11 @@ describe("pivot-walk", () => {
     expect(r.drills).toHaveLength(0);
     expect(r.skipped).toMatch(/recurring/);
   });
+
+  test("a label over a chord is written once, not on every note of it", () => {
+    const chords = makePassage({ right: "[C4,E4]/4@1,3 G4/4@5 [C4,E4]/4@1,3 G4/4@5" });
+    const [d] = pivotWalk.generate(chords, pivotWalkOptions.parse({ groupBy: "bar" }), makeContext()).drills;
+    const words = d.score.events.filter((e) => e.words).map((e) => e.words);
+    expect(words).toEqual(["up by semitones", "as written", "down by semitones", "as written"]);
+  });
 });
