@@ -60,7 +60,9 @@ export function repairWithReport(events: readonly NoteEvent[], handOf: (e: NoteE
 }
 
 function repairHand(out: Mutable[], idx: number[], hand: Hand): number {
-  const at = (i: number) => out[i]!.onset.valueOf();
+  const onsets = new Float64Array(out.length);
+  for (const i of idx) onsets[i] = out[i]!.onset.valueOf();
+  const at = (i: number) => onsets[i]!;
   idx.sort((a, b) => at(a) - at(b));
   const open = new Map<string, Struck>();
   const groups = new Map<number, Struck[]>();
@@ -171,6 +173,7 @@ function repeats(s: Struck, finger: number | null, lines: Lines): boolean {
 
 /** True when the held and struck keys are ordered and no struck key repeats its line's finger. */
 function settled(held: readonly Struck[], list: readonly Struck[], hand: Hand, lines: Lines): boolean {
+  if (held.length === 0 && list.length === 1) return !repeats(list[0]!, list[0]!.finger, lines);
   const union = [...held, ...list].sort((a, b) => a.midi - b.midi);
   return orderedOk(union.map((s) => s.finger), hand) && !list.some((s) => repeats(s, s.finger, lines));
 }

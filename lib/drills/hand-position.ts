@@ -114,6 +114,25 @@ export function handPositions(
 ): HandPosition[] {
   const sons = passage.sonorities[hand];
   if (sons.length === 0) return [];
+  // Several families ask for the same positions: remember them per passage (and fingering memo).
+  const key = breaks ? null : `${hand}|${profile.spanMm}|${profile.octaveMm}`;
+  const known = key ? CACHE.get(passage)?.get(memo)?.get(key) : undefined;
+  if (known) return known;
+  const found = findPositions(passage, hand, profile, memo, breaks);
+  if (key) {
+    let byPassage = CACHE.get(passage);
+    if (!byPassage) CACHE.set(passage, (byPassage = new WeakMap()));
+    let byMemo = byPassage.get(memo);
+    if (!byMemo) byPassage.set(memo, (byMemo = new Map()));
+    byMemo.set(key, found);
+  }
+  return found;
+}
+
+const CACHE = new WeakMap<Passage, WeakMap<FingeringMemo, Map<string, HandPosition[]>>>();
+
+function findPositions(passage: Passage, hand: Hand, profile: HandProfile, memo: FingeringMemo, breaks?: ReadonlySet<number>): HandPosition[] {
+  const sons = passage.sonorities[hand];
   const fingerOf = passageFingers(passage, hand, memo);
   const runs: { sons: Sonority[]; keys: Map<number, [number, number, NoteEvent]> }[] = [];
   for (const s of sons) {

@@ -68,7 +68,10 @@ export function noteCells(a: number, b: number): [number[], number[]][] {
  * positionCells(2, 2); // [[[0],[0]], [[0],[1]], [[1],[0]], [[1],[1]], [[0],[0,1]], [[1],[0,1]]]
  */
 export function positionCells(a: number, b: number): [number[], number[]][] {
-  return noteCells(a, b).filter(([x, y]) => x.length === 1 && y.length <= 2);
+  const cells: [number[], number[]][] = [];
+  for (let i = 0; i < a; i++) for (let j = 0; j < b; j++) cells.push([[i], [j]]);
+  for (let i = 0; i < a; i++) for (let j = 0; j < b; j++) for (let k = j + 1; k < b; k++) cells.push([[i], [j, k]]);
+  return cells;
 }
 
 type Keys = readonly NoteEvent[];
