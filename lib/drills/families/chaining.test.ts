@@ -14,7 +14,7 @@ describe("chaining", () => {
 
   test("each link played twice, then a rest; the next link starts on the last note", () => {
     const run = makePassage({ right: "C4/8@1 D4/8@2 E4/8@3 F4/8@1 G4/8@2 A4/8@3 B4/8@4 C5/8@5" });
-    const [d] = chaining.generate(run, chainingOptions.parse({ size: 4, maxLinks: 2 }), makeContext()).drills;
+    const [d] = chaining.generate(run, chainingOptions.parse({ size: "4", maxLinks: 2 }), makeContext()).drills;
     // 4/4: a link of 4 eighths played twice fills the bar, so its last note carries a pause.
     expect(drillText(d.score.events).slice(0, 8)).toEqual([
       "C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2", "C4:1/2", "D4:1/2", "E4:1/2", "F4:1/2!fermata",
@@ -27,7 +27,7 @@ describe("chaining", () => {
   });
 
   test("a run no longer than one link is skipped with a reason", () => {
-    const r = chaining.generate(makePassage({ right: "C4/4 D4/4 E4/4" }), chainingOptions.parse({ size: 3 }), makeContext());
+    const r = chaining.generate(makePassage({ right: "C4/4 D4/4 E4/4" }), chainingOptions.parse({ size: "3" }), makeContext());
     expect(r.drills).toHaveLength(0);
     expect(r.skipped).toMatch(/no run longer than 3 notes/);
   });

@@ -15,7 +15,7 @@ const VALUES = { "16th": new Fraction(1, 4), eighth: new Fraction(1, 2), quarter
 /** Options: notes per link, times each link is played, its note value, and most links per drill. */
 export const chainingOptions = z.object({
   /** Notes per link; "auto" takes 3 in compound meters (they move in threes) and 4 otherwise. */
-  size: z.union([z.literal(3), z.literal(4), z.literal("auto")]).default("auto"),
+  size: z.enum(["auto", "3", "4"]).default("auto"),
   repeats: z.number().int().min(1).max(4).default(2),
   value: z.enum(["16th", "eighth", "quarter"]).default("eighth"),
   maxLinks: z.number().int().min(1).max(16).default(6),
@@ -39,7 +39,7 @@ export function chainLinks(count: number, size: number): [number, number][] {
 
 /** Notes per link for a passage: the option, or 3 in compound meters and 4 otherwise. */
 function linkSize(passage: Passage, o: ChainingOptions): 3 | 4 {
-  if (o.size !== "auto") return o.size;
+  if (o.size !== "auto") return o.size === "3" ? 3 : 4;
   const { beats, beatType } = passage.time;
   return beatType >= 8 && beats % 3 === 0 && beats > 3 ? 3 : 4;
 }
