@@ -163,6 +163,14 @@ function orderedOk(fingers: readonly (number | null)[], hand: Hand): boolean {
 
 type Lines = ReadonlyMap<Struck, { prev?: Struck }>;
 
+/** Every choice of k fingers, rising (right hand) or falling (left hand), by k; built once. */
+const RISING: number[][][] = [[], [], [], [], [], []];
+for (let mask = 1; mask < 32; mask++) {
+  const fingers = [1, 2, 3, 4, 5].filter((f) => mask & (1 << (f - 1)));
+  RISING[fingers.length]!.push(fingers);
+}
+const FALLING = RISING.map((ts) => ts.map((t) => [...t].reverse()));
+
 /** True when the same finger would play this key right after a nearby other key in the line. */
 function repeats(s: Struck, finger: number | null, lines: Lines): boolean {
   const prev = lines.get(s)?.prev;
@@ -189,10 +197,7 @@ function solve(keys: Struck[], held: readonly Struck[], list: readonly Struck[],
   let best: number[] | null = null;
   let bestCost = Infinity;
   if (k <= 5) {
-    for (let mask = 1; mask < 32; mask++) {
-      const rising = [1, 2, 3, 4, 5].filter((f) => mask & (1 << (f - 1)));
-      if (rising.length !== k) continue;
-      const tuple = hand === "right" ? rising : rising.reverse();
+    for (const tuple of (hand === "right" ? RISING : FALLING)[k]!) {
       let cost = 0;
       for (let i = 0; i < k && cost < bestCost; i++) {
         const s = union[i]!;
