@@ -10,6 +10,7 @@ import { barLength, laySegments, type LaidEvent, type Segment, type Slot, type S
 import { countOf } from "./length";
 import { beatUnit, inBeats } from "./meter";
 import { mulberry32 } from "./rng";
+import { repairWithReport } from "./finger-repair";
 import { estimatedFingers, measureSpan, newFingeringMemo, PROFILE, type FingeringMemo } from "./span";
 
 export { barLength, writtenPieces, laySegments } from "./layout";
@@ -32,6 +33,8 @@ export interface DrillSpec {
   readonly warnings?: readonly DrillWarning[];
   /** Time signature of the drill; defaults to the passage's. */
   readonly time?: TimeSignature;
+  /** The segments' right and left lines are two voices of this one hand (fingered as one hand). */
+  readonly oneHand?: Hand;
 }
 
 /**
@@ -272,18 +275,28 @@ export function buildDrill(passage: Passage, spec: DrillSpec, ctx: DrillContext)
   const onsetKey = Float64Array.from(laid, (e) => e.onset.valueOf());
   const staffKey = Int8Array.from(laid, (e) => staffOf(e.hand));
   const pitchKey = Int16Array.from(laid, (e) => e.pitch?.midi ?? -1);
+  // Grace notes come before the note they ornament, in the order written.
+  const graceKey = Int8Array.from(laid, (e) => (e.grace ? 0 : 1));
   const order = Array.from(laid, (_, i) => i).sort(
-    (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || pitchKey[a]! - pitchKey[b]!,
+    (a, b) => onsetKey[a]! - onsetKey[b]! || staffKey[a]! - staffKey[b]! || graceKey[a]! - graceKey[b]! || (graceKey[a] ? pitchKey[a]! - pitchKey[b]! : 0),
   );
   const ordered = order.map((i) => laid[i]!);
   const memo = ctx.fingeringMemo ?? newFingeringMemo();
   // Laid events carry every field the fingering estimate reads (pitch, onset, tie, measure, fingering).
-  const fingers = estimatedFingers(ordered as unknown as NoteEvent[], (i) => ordered[i]!.hand, {
+  const playedBy = (h: Hand): Hand => spec.oneHand ?? h;
+  const fingers = estimatedFingers(ordered as unknown as NoteEvent[], (i) => playedBy(ordered[i]!.hand), {
     passage, sources: ordered.map((e) => e.source), likes: ordered.map((e) => e.like), memo,
   });
-  const events: NoteEvent[] = ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand), fingers[i] ?? null));
+  const handOfStaff = new Map(hands.map((h) => [staffOf(h), playedBy(h)]));
+  const { events, unsettled } = repairWithReport(
+    ordered.map((l, i) => toEvent(l, `e${i + 1}`, staffOf(l.hand), fingers[i] ?? null)),
+    (e) => handOfStaff.get(e.staff) ?? "right",
+  );
 
   const warnings: DrillWarning[] = [...(spec.warnings ?? [])];
+  if (unsettled > 0) {
+    warnings.push({ code: "fingering", message: "Some notes cannot be fingered in order with the printed fingering; check the fingering before handing this out." });
+  }
   const outOfRange = events.filter((e) => e.pitch && (e.pitch.midi < PIANO_RANGE.low || e.pitch.midi > PIANO_RANGE.high));
   if (outOfRange.length) {
     warnings.push({ code: "range", message: `${countOf(outOfRange.length, "note")} ${outOfRange.length === 1 ? "falls" : "fall"} outside the keyboard (A0–C8).` });

@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { makeContext } from "./build";
 import { barProblems } from "./families/shared-2-layout";
 import { generateOctaveShift, octaveShiftOptions } from "./families/octave-shift";
-import { applyLightEndings, lightEndingsOption, withLightEndings } from "./groups-option";
+import { applyLightEndings, lightEndingsOption, withEndings, withLightEndings } from "./groups-option";
 import { generateVoiceIsolation, voiceIsolationOptions } from "./families/voice-isolation";
 import { makePassage } from "./test-passages";
 
@@ -24,5 +24,25 @@ describe("light endings", () => {
     const d = generateOctaveShift(makePassage({ right: "C4/8 E4/8" }), octaveShiftOptions.parse({}), ctx).drills;
     expect(withLightEndings(d, lightEndingsOption.parse({}))).toEqual(d);
     expect(applyLightEndings(d[0]).score.events.map((e) => e.duration.toFraction())).toEqual(d[0].score.events.map((e) => e.duration.toFraction()));
+  });
+});
+
+// Rubric "endings (option)": a short, light last note, and the long ending as its contrast (common practice).
+describe("short versus long endings", () => {
+  test("short-and-long writes the short ending first, then the drill as written", () => {
+    const p = makePassage({ right: "[C4,E4]/8 [D4,F4]/8 [E4,G4]/8 [F4,A4]/8 [G4,B4]/2" });
+    const drills = generateVoiceIsolation(p, voiceIsolationOptions.parse({ otherHand: "without" }), ctx).drills.slice(0, 1);
+    const [short, long] = withEndings(drills, "short-and-long");
+    expect(short.variant).toBe("top-short-ending");
+    expect(short.score.events.find((e) => e.pitch?.midi === 71)!.duration.toFraction()).toBe("1/2");
+    expect(long.variant).toBe("top");
+    expect(long.score.events.find((e) => e.pitch?.midi === 71)!.duration.toFraction()).toBe("2");
+    expect(barProblems(short.score)).toEqual([]);
+    expect(withEndings(drills, "written")).toEqual(drills);
+  });
+
+  test("a drill with no long ending is written once", () => {
+    const d = generateOctaveShift(makePassage({ right: "C4/8 E4/8" }), octaveShiftOptions.parse({}), ctx).drills;
+    expect(withEndings(d, "short-and-long")).toHaveLength(d.length);
   });
 });

@@ -12,6 +12,13 @@ import { tupletFor } from "./families/shared-2-layout";
 /** Registry-level option: end each group lightly. */
 export const lightEndingsOption = z.object({ lightEndings: z.boolean().default(false) });
 
+/**
+ * Registry-level option on group endings (DRILL-RUBRIC.md "endings"; common practice): as written,
+ * short and light, or both — the short ending, then the long ending as written as its contrast.
+ */
+export const ENDINGS = ["written", "short", "short-and-long"] as const;
+export type Endings = (typeof ENDINGS)[number];
+
 const key = (e: NoteEvent) => `${e.staff}/${e.voice}`;
 
 /**
@@ -67,3 +74,23 @@ export function applyLightEndings(drill: Drill): Drill {
 export function withLightEndings(drills: readonly Drill[], option: z.output<typeof lightEndingsOption>): Drill[] {
   return option.lightEndings ? drills.map(applyLightEndings) : [...drills];
 }
+
+/**
+ * Apply the endings option: "short" ends every group lightly; "short-and-long" gives, for each drill
+ * whose groups end on a long note, the short-ending version first and then the drill as written
+ * (the long ending as its contrast); "written" leaves the drills as they are.
+ * @example withEndings(drills, "short-and-long").map((d) => d.variant) // ["block-short-ending", "block", …]
+ */
+export function withEndings(drills: readonly Drill[], endings: Endings): Drill[] {
+  if (endings === "written") return [...drills];
+  if (endings === "short") return drills.map(applyLightEndings);
+  return drills.flatMap((d) => {
+    const light = applyLightEndings(d);
+    if (light.score.events.length === d.score.events.length) return [d];
+    return [
+      { ...light, variant: `${d.variant}-short-ending`, title: `${d.title}, short endings`, studentNote: `${d.studentNote} End each group short and light.` },
+      { ...d, title: `${d.title}, long endings`, studentNote: `${d.studentNote} Now hold each group's last note for its full length.` },
+    ];
+  });
+}
+

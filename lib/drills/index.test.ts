@@ -8,6 +8,8 @@ import { PROBLEM_TAGS, type DrillFamily } from "./types";
 const IDS = [
   "blocking", "note-pairs", "rhythm-variants", "stops", "lift-rests", "scale-rhythm", "pivot-walk",
   "voice-isolation", "doubles", "octave-shift", "held-tone", "sequence", "thumb-pairs", "tempo-ladder",
+  // Techniques a complete lesson uses (DRILL-RUBRIC.md): chaining, octave doubling, grace notes slowed.
+  "chaining", "octave-doubling", "ornaments",
 ];
 
 describe("drill registry", () => {
@@ -27,7 +29,7 @@ describe("drill registry", () => {
   });
 
   test("generateDrills runs the chosen families and lists the ones that do not apply, with a reason", () => {
-    const p = makePassage({ right: "C4/4 D4/4 E4/4 F4/4" });
+    const p = makePassage({ right: "C4/4 E4/4 G4/4 C5/4" });
     const { drills, skipped } = generateDrills(p, { families: ["blocking", "pivot-walk", "no-such-family"] });
     expect(drills.length).toBeGreaterThan(0);
     expect(drills.every((d) => d.family === "blocking")).toBe(true);

@@ -7,8 +7,11 @@ import type { Drill, DrillFamily, HandProfile } from "./types";
 import { makeContext } from "./build";
 import { barCap, capDrill } from "./length";
 import { newFingeringMemo } from "./span";
-import { withLightEndings } from "./groups-option";
+import { withEndings, type Endings } from "./groups-option";
 import { blocking } from "./families/blocking";
+import { chaining } from "./families/chaining";
+import { octaveDoubling } from "./families/octave-doubling";
+import { ornaments } from "./families/ornaments";
 import { doubles } from "./families/doubles";
 import { heldTone } from "./families/held-tone";
 import { liftRests } from "./families/lift-rests";
@@ -31,7 +34,7 @@ export { makeContext } from "./build";
 export { estimateFingering } from "./fingering";
 export { DEFAULT_PROFILE, keyDistanceMm, profileFromInches, spanOf } from "./hand";
 export { difficultyMap, hardestBars } from "./difficulty";
-export { applyLightEndings, lightEndingsOption } from "./groups-option";
+export { applyLightEndings, ENDINGS, lightEndingsOption, withEndings, type Endings } from "./groups-option";
 export { barCap, capDrill, countOf, shownLabel } from "./length";
 
 /**
@@ -45,6 +48,7 @@ export const families: Readonly<Record<string, DrillFamily>> = Object.fromEntrie
     [
       blocking, notePairs, rhythmVariants, stops, liftRests, scaleRhythm, pivotWalk,
       voiceIsolation, doubles, octaveShift, heldTone, sequence, thumbPairs, tempoLadder,
+      chaining, octaveDoubling, ornaments,
     ] as DrillFamily[]
   ).map((f) => [f.id, f]),
 );
@@ -62,6 +66,11 @@ export interface GenerateOptions {
   readonly maxBars?: number;
   /** End each group lightly: a long note after shorter ones is cut short and lifted (default false). */
   readonly lightEndings?: boolean;
+  /**
+   * Group endings: "written" (default), "short" (as `lightEndings`), or "short-and-long": each drill
+   * with long endings twice, short and light first, then long as written for contrast.
+   */
+  readonly endings?: Endings;
 }
 
 export interface GenerateResult {
@@ -92,6 +101,7 @@ function hashId(id: string): number {
  * @example
  * const { drills, skipped } = generateDrills(passage, { families: ["blocking"], seed: 3 });
  * generateDrills(passage, { families: ["stops"], lightEndings: true }); // groups end short and light
+ * generateDrills(passage, { families: ["stops"], endings: "short-and-long" }); // short, then long as contrast
  */
 export function generateDrills(passage: Passage, opts: GenerateOptions = {}): GenerateResult {
   const ids = opts.families ?? Object.keys(families);
@@ -111,7 +121,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     try {
       result = family.generate(passage, options, ctx);
       const cap = barCap(passage, ctx);
-      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }).map((d) => capDrill(d, cap));
+      written = withEndings(result.drills, opts.endings ?? (opts.lightEndings ? "short" : "written")).map((d) => capDrill(d, cap));
     } catch (error) {
       // A family that cannot write something in this passage is skipped; the others still generate.
       skipped.push({ family: id, reason: `This drill could not be written for these bars: ${reasonOf(error)}` });

@@ -31,6 +31,8 @@ export interface Slot {
   readonly marks?: readonly NoteMark[];
   readonly words?: string;
   readonly dynamic?: string;
+  /** Grace notes written just before this slot's notes (no time of their own). */
+  readonly grace?: readonly SlotNote[];
 }
 
 /** A stretch of drill music that starts on a new bar; both hands run side by side. */
@@ -140,6 +142,16 @@ function piecesExact(slots: readonly Slot[], start: Fraction, bar: Fraction): { 
   return { pieces: out, end: t };
 }
 
+/** The slot's notes low to high, one per key (a printed finger's note kept over a bare one). */
+function oneNotePerKey(notes: readonly SlotNote[]): SlotNote[] {
+  const byKey = new Map<number, SlotNote>();
+  for (const n of notes) {
+    const had = byKey.get(n.pitch.midi);
+    if (!had || (!had.source?.fingering?.length && n.source?.fingering?.length)) byKey.set(n.pitch.midi, n);
+  }
+  return [...byKey.values()].sort((a, b) => a.pitch.midi - b.pitch.midi);
+}
+
 /** Lay one hand's slots from `start`, splitting at barlines; returns events and the end time. */
 function layHand(
   hand: Hand,
@@ -151,7 +163,9 @@ function layHand(
   const events: LaidEvent[] = [];
   slots.forEach((slot, s) => {
     const pieces = all[s]!;
-    const sorted = slot.notes.length > 1 ? [...slot.notes].sort((a, b) => a.pitch.midi - b.pitch.midi) : slot.notes;
+    // One hand plays a key once: a unison of two voices in one slot is written as one note (the
+    // one with a printed finger, if any), never as two noteheads with one finger.
+    const sorted = slot.notes.length > 1 ? oneNotePerKey(slot.notes) : slot.notes;
     const extra: { marks?: readonly NoteMark[]; words?: string; dynamic?: string } = {};
     if (slot.marks !== undefined) extra.marks = slot.marks;
     if (slot.words !== undefined) extra.words = slot.words;
@@ -163,6 +177,17 @@ function layHand(
     pieces.forEach((p, i) => {
       const { measure } = p;
       const first = i === 0;
+      if (first && slot.grace) {
+        for (const g of slot.grace) {
+          const written = { type: g.source?.written.type ?? "eighth", dots: 0, tuplet: null };
+          const fromScore = g.source?.fingering?.length ? g.source.fingering : undefined;
+          events.push({
+            hand, measure, onset: p.onset, duration: new Fraction(0), written, pitch: g.pitch, chord: false, tie: "none", grace: true,
+            ...(g.source ? { source: g.source } : {}),
+            ...(fromScore ? { fingering: fromScore, fingeringSource: "score" as const } : {}),
+          });
+        }
+      }
       const tie = pieces.length === 1 ? "none" : first ? "start" : i === pieces.length - 1 ? "stop" : "continue";
       if (sorted.length === 0) {
         events.push({ hand, measure, onset: p.onset, duration: p.duration, written: p.written, pitch: null, chord: false, tie: "none", ...(first ? extra : {}) });

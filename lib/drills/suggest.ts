@@ -6,15 +6,15 @@ import type { ProblemTag } from "./types";
 
 /** Per tag, families from most to least useful. */
 export const SUGGESTIONS: Readonly<Record<ProblemTag, readonly string[]>> = {
-  rhythm: ["rhythm-variants", "scale-rhythm", "tempo-ladder", "stops", "lift-rests"],
-  evenness: ["rhythm-variants", "stops", "note-pairs", "thumb-pairs", "tempo-ladder"],
+  rhythm: ["rhythm-variants", "scale-rhythm", "tempo-ladder", "stops", "lift-rests", "ornaments"],
+  evenness: ["rhythm-variants", "stops", "chaining", "note-pairs", "thumb-pairs", "tempo-ladder", "ornaments"],
   rotation: ["pivot-walk", "held-tone", "blocking", "note-pairs", "rhythm-variants"],
-  "lateral move": ["blocking", "lift-rests", "thumb-pairs", "octave-shift", "sequence"],
+  "lateral move": ["blocking", "chaining", "lift-rests", "thumb-pairs", "octave-shift", "sequence"],
   release: ["lift-rests", "stops", "blocking", "tempo-ladder"],
   leap: ["lift-rests", "octave-shift", "stops", "blocking", "tempo-ladder"],
-  voicing: ["voice-isolation", "doubles", "held-tone", "note-pairs"],
+  voicing: ["voice-isolation", "doubles", "octave-doubling", "held-tone", "note-pairs"],
   stretch: ["blocking", "pivot-walk", "note-pairs", "octave-shift"],
-  coordination: ["voice-isolation", "tempo-ladder", "sequence", "rhythm-variants", "blocking"],
+  coordination: ["voice-isolation", "octave-doubling", "tempo-ladder", "sequence", "rhythm-variants", "blocking"],
 };
 
 /**

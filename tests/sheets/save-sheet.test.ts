@@ -33,7 +33,7 @@ afterAll(() => t.cleanup());
 
 async function generated() {
   const src = await knotQueries.getKnotSource(t.db, studioId, knotId);
-  const request = req.GenerateRequest.parse({ families: ["blocking"] });
+  const request = req.GenerateRequest.parse({ families: ["blocking", "note-pairs"] });
   return { request, out: gen.generateForKnot(src!, request) };
 }
 

@@ -8,7 +8,7 @@ const passage = makePassage({ right: "C4/8@1 E4/8 G4/8 E4/8 D4/8 F4/8 A4/8 F4/8"
 
 describe("blocking", () => {
   test("options parse with defaults", () => {
-    expect(blockingOptions.parse({})).toEqual({ groupBy: "beat", variants: ["block", "block-then-tap", "inner-then-chord"] });
+    expect(blockingOptions.parse({})).toEqual({ groupBy: "position", variants: ["block", "block-then-tap", "inner-then-chord"] });
   });
 
   test("half-bar groups become one chord of their distinct pitches, as long as the group", () => {
@@ -41,5 +41,35 @@ describe("blocking", () => {
     const two = makePassage({ right: "C4/8 D4/8 E4/8 F4/8" });
     const { drills } = blocking.generate(two, blockingOptions.parse({ variants: ["inner-then-chord"] }), makeContext());
     expect(drills).toHaveLength(0);
+  });
+
+  // Rubric (DRILL-RUBRIC.md, blocking; common practice): each hand position as one chord, in the
+  // passage's rhythm of positions; never several positions merged; never a scale run as clusters.
+  test("by position: each position one chord for as long as the hand stays in it", () => {
+    // Broken C major then a move to G major (the thumb takes G4): two positions.
+    const moving = makePassage({ right: "C4/8@1 E4/8@2 G4/8@3 C5/8@5 G4/8@1 B4/8@2 D5/8@3 G5/8@5" });
+    const [block] = blocking.generate(moving, blockingOptions.parse({ variants: ["block"] }), makeContext()).drills;
+    expect(drillText(block.score.events)).toEqual(["C4+E4+G4+C5:2", "G4+B4+D5+G5:2"]);
+    const fingers = block.score.events.filter((e) => e.pitch).map((e) => e.fingering?.[0]?.finger);
+    expect(fingers).toEqual([1, 2, 3, 5, 1, 2, 3, 5]); // the passage's own fingers, rising with pitch
+  });
+
+  test("a melody that moves by step never forms a chord to block, and says so", () => {
+    const scale = makePassage({ right: "C4/8 D4/8 E4/8 F4/8 G4/8 A4/8 B4/8 C5/8" });
+    const r = blocking.generate(scale, blockingOptions.parse({}), makeContext());
+    expect(r.drills).toHaveLength(0);
+    expect(r.skipped).toMatch(/never settle into a hand position that forms a chord/);
+  });
+
+  test("positions wider than the hand are never merged into one chord", () => {
+    // C2–G2 then C4–G4: two octaves apart, far over any comfortable span (FACTS.md §4: about a tenth at most).
+    const wide = makePassage({ left: "C2/4@5 G2/4@1 C4/4@5 G4/4@1" });
+    const [block] = blocking.generate(wide, blockingOptions.parse({ variants: ["block"] }), makeContext()).drills;
+    expect(drillText(block.score.events)).toEqual(["C2+G2:2", "C4+G4:2"]);
+  });
+
+  test("inner notes, then the full chord, only for chords of three or more keys", () => {
+    const thirds = makePassage({ right: "C4/4@1 E4/4@3 C4/4@1 E4/4@3" });
+    expect(blocking.generate(thirds, blockingOptions.parse({ variants: ["inner-then-chord"] }), makeContext()).drills).toHaveLength(0);
   });
 });

@@ -22,18 +22,21 @@ export const doublesOptions = z.object({
 export type DoublesOptions = z.output<typeof doublesOptions>;
 
 /**
- * The hand's two-note sonorities in order (the double-note steps), at most `max`.
+ * The hand's two-note sonorities of two different keys in order (the double-note steps), at most `max`.
  * @example doubleSteps(makePassage({ right: "[C4,E4]/4 [D4,F4]/4" }).sonorities.right, 8).length // 2
  */
 export function doubleSteps(sons: readonly Sonority[], max: number): Sonority[] {
-  return sons.filter((s) => s.notes.length === 2).slice(0, max);
+  // Two different keys: a unison written in two voices is one key, not a double note.
+  return sons.filter((s) => s.notes.length === 2 && s.notes[0]!.pitch!.midi !== s.notes[1]!.pitch!.midi).slice(0, max);
 }
 
 type Who = "upper" | "lower";
 
 function voiceSlots(steps: readonly Sonority[], who: Who, repeating: boolean, o: DoublesOptions): Slot[] {
   const value = VALUES[o.value];
-  const loud = o.dynamics ? (repeating ? "f" : "p") : undefined;
+  // Only the repeating (louder) voice carries a dynamic: both voices start together, and two
+  // dynamics at one moment would stack under the note (the holding voice is marked soft in words).
+  const loud = o.dynamics && repeating ? "f" : undefined;
   return steps.flatMap((s, i) => {
     const n = noteOf(s.notes[who === "upper" ? 1 : 0]);
     const dyn = i === 0 && loud ? { dynamic: loud } : {};
@@ -74,8 +77,11 @@ function drillsForHand(passage: Passage, hand: Hand, o: DoublesOptions, ctx: Dri
  * @example generateDoubles(makePassage({ right: "[C4,E4]/4 [D4,F4]/4" }), doublesOptions.parse({}), makeContext()).drills.length // 3
  */
 export function generateDoubles(passage: Passage, options: DoublesOptions, ctx: DrillContext): FamilyResult {
-  const drills = passageHands(passage).flatMap((h) => drillsForHand(passage, h, options, ctx));
-  return drills.length ? { drills } : { drills: [], skipped: "no double notes (two notes together in one hand)" };
+  const written = passageHands(passage).flatMap((h) => drillsForHand(passage, h, options, ctx));
+  // A step whose printed fingering cannot hold one note while the other repeats is left out.
+  const drills = written.filter((d) => !d.warnings.some((w) => w.code === "fingering"));
+  if (drills.length) return { drills };
+  return { drills: [], skipped: written.length ? "The double notes cannot be split into held and repeated voices with the passage's fingering." : "There are no double notes (two notes together in one hand)." };
 }
 
 /** The `doubles` family for the registry. */

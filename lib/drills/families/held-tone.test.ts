@@ -53,7 +53,7 @@ describe("held-tone", () => {
 
   test("skips a scale, where nothing recurs", () => {
     const r = generateHeldTone(makePassage({ right: "C4/8 D4/8 E4/8 F4/8 G4/8 A4/8 B4/8 C5/8" }), opts, ctx);
-    expect(r).toEqual({ drills: [], skipped: "no note recurs every other note" });
+    expect(r).toEqual({ drills: [], skipped: "No note comes back every other note, so there is nothing to hold." });
   });
 
   test("options schema has defaults", () => {

@@ -150,8 +150,11 @@ function drillsForHand(passage: Passage, hand: Hand, o: HeldToneOptions, ctx: Dr
  * @example generateHeldTone(makePassage({ left: "C3/8 G3/8 E3/8 G3/8 C3/8 G3/8 E3/8 G3/8" }), heldToneOptions.parse({}), makeContext()).drills.length // 3
  */
 export function generateHeldTone(passage: Passage, options: HeldToneOptions, ctx: DrillContext): FamilyResult {
-  const drills = passageHands(passage).flatMap((h) => drillsForHand(passage, h, options, ctx));
-  return drills.length ? { drills } : { drills: [], skipped: "no note recurs every other note" };
+  const written = passageHands(passage).flatMap((h) => drillsForHand(passage, h, options, ctx));
+  // Holding a key the printed fingering gives to a moving note cannot be played: leave those out.
+  const drills = written.filter((d) => !d.warnings.some((w) => w.code === "fingering"));
+  if (drills.length) return { drills };
+  return { drills: [], skipped: written.length ? "The recurring note cannot be held down with the passage's fingering." : "No note comes back every other note, so there is nothing to hold." };
 }
 
 /** The `held-tone` family for the registry. */

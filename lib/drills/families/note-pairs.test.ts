@@ -2,7 +2,7 @@ import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { makeContext } from "../build";
 import { drillText, makePassage } from "../test-passages";
-import { noteCells, notePairs, notePairsOptions, subsets } from "./note-pairs";
+import { noteCells, notePairs, notePairsOptions, positionCells, subsets } from "./note-pairs";
 
 describe("note-pairs", () => {
   test("options parse with defaults", () => {
@@ -34,11 +34,11 @@ describe("note-pairs", () => {
     );
   });
 
-  test("a drill of third → third: cells repeated twice with a rest, capped, saying n of N", () => {
+  test("a drill of third → third: cells repeated twice with a rest, capped, saying n of N cells", () => {
     const p = makePassage({ right: "[C4,E4]/4@1,3 [D4,F4]/4@2,4" });
     const { drills } = notePairs.generate(p, notePairsOptions.parse({ maxCells: 2 }), makeContext());
     expect(drills).toHaveLength(1);
-    expect(drills[0].title).toContain("(2 of 9)");
+    expect(drills[0].title).toContain("(2 of 6 cells)"); // 2·2 pairs, then 2 one → two cells
     expect(drillText(drills[0].score.events)).toEqual([
       "C4:1/2", "D4:1/2", "C4:1/2", "D4:1/2", "r:1",
       "C4:1/2", "F4:1/2", "C4:1/2", "F4:1/2", "r:1",
@@ -50,18 +50,27 @@ describe("note-pairs", () => {
     expect(f4.fingering?.[0].finger).toBe(4); // the score's finger travels with the note
   });
 
+  test("position cells: every ordered pair, then one key to two keys (hand-written)", () => {
+    expect(positionCells(2, 2)).toEqual([[[0], [0]], [[0], [1]], [[1], [0]], [[1], [1]], [[0], [0, 1]], [[1], [0, 1]]]);
+    expect(positionCells(3, 3)).toHaveLength(9 + 3 * 3);
+  });
+
   test("a single repeated chord has nothing to pair", () => {
     const r = notePairs.generate(makePassage({ right: "C4/4 C4/4" }), notePairsOptions.parse({}), makeContext());
     expect(r.drills).toHaveLength(0);
     expect(r.skipped).toBeTruthy();
   });
-  test("a hand with chords pairs only connections that involve a chord; single notes alone carry no count", () => {
-    const mixed = makePassage({ right: "C4/4 D4/4 [E4,G4]/4 C4/4" });
-    const titles = notePairs.generate(mixed, notePairsOptions.parse({}), makeContext()).drills.map((d) => d.title);
-    expect(titles).toEqual(["Note pairs D4 → E4+G4 (3 of 3)", "Note pairs E4+G4 → C4 (3 of 3)"]);
-    const single = makePassage({ right: "C4/4 D4/4" });
-    expect(notePairs.generate(single, notePairsOptions.parse({}), makeContext()).drills.map((d) => d.title)).toEqual([
-      "Note pairs C4 → D4",
-    ]);
+
+  // Rubric (note-pairs; common practice): between two consecutive positions, cells reach the real leap.
+  test("between two hand positions: pairs of their keys, reaching the move", () => {
+    // C position (1-3-5), then the hand moves up to the G position (thumb on G4).
+    const moving = makePassage({ right: "C4/8@1 E4/8@3 G4/8@5 E4/8@3 G4/8@1 B4/8@3 D5/8@5 B4/8@3" });
+    const [d] = notePairs.generate(moving, notePairsOptions.parse({ maxCells: 20 }), makeContext()).drills;
+    expect(d.title).toBe("Note pairs C4+E4+G4 → G4+B4+D5"); // all 18 cells shown, so no count
+    const firsts = d.score.events.filter((e) => e.pitch).map((e) => e.pitch!.midi);
+    expect(firsts.slice(0, 4)).toEqual([60, 67, 60, 67]); // bottom → bottom: the thumb's move C4 → G4
+    expect(firsts).toContain(74); // the top of the new position is reached
+    const fingers = d.score.events.filter((e) => e.pitch && e.pitch.midi === 74).map((e) => e.fingering?.[0].finger);
+    expect(new Set(fingers)).toEqual(new Set([5])); // the passage's finger on D5
   });
 });

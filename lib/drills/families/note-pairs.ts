@@ -1,11 +1,14 @@
 /**
- * Note pairs: for two consecutive sonorities A → B, every cell from a non-empty subset of A to a
- * non-empty subset of B, smallest first, bottom to top; each cell repeated. The full count is
- * (2^a − 1)(2^b − 1); the teacher caps how many cells a drill shows and the drill says "n of N".
+ * Note pairs: for two consecutive hand positions A → B (`hand-position.ts`), every ordered pair of a
+ * key of A to a key of B (bottom → bottom, bottom → top, top → bottom …), then one key of A to two
+ * keys of B; each cell repeated and followed by a rest, fingered as the passage is. The teacher caps
+ * how many cells a drill shows and the title says "n of N cells". A hand that stays in one position
+ * pairs its consecutive notes or chords instead.
  */
 import Fraction from "fraction.js";
 import { z } from "zod";
-import type { Passage, Sonority } from "../../score/types";
+import type { Hand, NoteEvent, Passage } from "../../score/types";
+import { handPositions } from "../hand-position";
 import type { Drill, DrillContext, DrillFamily, FamilyResult } from "../types";
 import { buildDrill, noteOf, passageHands, restSlot, type Slot } from "../build";
 import { pitchName } from "../spell";
@@ -57,10 +60,34 @@ export function noteCells(a: number, b: number): [number[], number[]][] {
   return cells;
 }
 
-const label = (s: Sonority) => s.notes.map((n) => pitchName(n.pitch!)).join("+");
+/**
+ * The cells a teacher drills between two positions of a and b keys: every ordered pair of one key
+ * of the first to one key of the second (bottom → bottom, bottom → next …), then one key to two keys.
+ *
+ * @example
+ * positionCells(2, 2); // [[[0],[0]], [[0],[1]], [[1],[0]], [[1],[1]], [[0],[0,1]], [[1],[0,1]]]
+ */
+export function positionCells(a: number, b: number): [number[], number[]][] {
+  const cells: [number[], number[]][] = [];
+  for (let i = 0; i < a; i++) for (let j = 0; j < b; j++) cells.push([[i], [j]]);
+  for (let i = 0; i < a; i++) for (let j = 0; j < b; j++) for (let k = j + 1; k < b; k++) cells.push([[i], [j, k]]);
+  return cells;
+}
+
+type Keys = readonly NoteEvent[];
+const label = (keys: Keys) => keys.map((n) => pitchName(n.pitch!)).join("+");
+
+/** Consecutive hand positions of a hand; a hand that never moves pairs its consecutive notes or chords. */
+function unitsOf(passage: Passage, hand: Hand, ctx: DrillContext): Keys[] {
+  const positions = handPositions(passage, hand, ctx.profile, ctx.fingeringMemo);
+  if (positions.length >= 2) return positions.map((p) => p.notes);
+  return passage.sonorities[hand].map((s) => [...new Map(s.notes.map((n) => [n.pitch!.midi, n])).values()]);
+}
 
 /**
- * One drill per consecutive pair of different sonorities (up to `maxPairs` per hand).
+ * One drill per move between consecutive hand positions (up to `maxPairs` per hand): every pair of a
+ * key of the first position to a key of the second, then one key to two keys; each cell repeated,
+ * then a rest. The notes keep the passage's fingers.
  *
  * @example
  * notePairs.generate(passage, notePairsOptions.parse({ maxCells: 4 }), makeContext()).drills[0].title;
@@ -70,39 +97,37 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
   const v = VALUES[options.value];
   const hands = passageHands(passage);
   for (const hand of hands) {
-    const sons = passage.sonorities[hand];
-    // Pairs that involve a chord teach the most; single-note pairs only when the hand has no chords.
-    const hasChordPair = sons.some((s, i) => i + 1 < sons.length && s.notes.length + sons[i + 1].notes.length > 2);
+    const units = unitsOf(passage, hand, ctx);
     const seen = new Set<string>();
-    for (let i = 0; i + 1 < sons.length && seen.size < options.maxPairs; i++) {
-      const [A, B] = [sons[i], sons[i + 1]];
+    for (let i = 0; i + 1 < units.length && seen.size < options.maxPairs; i++) {
+      const [A, B] = [units[i]!, units[i + 1]!];
       const key = `${label(A)}>${label(B)}`;
       if (label(A) === label(B) || seen.has(key)) continue;
-      if (hasChordPair && A.notes.length + B.notes.length === 2) continue;
       seen.add(key);
-      const all = noteCells(A.notes.length, B.notes.length);
+      const all = positionCells(A.length, B.length);
       const shown = all.slice(0, options.maxCells);
       const slots: Slot[] = shown.flatMap(([x, y]) => {
         const cell: Slot[] = [];
         for (let r = 0; r < options.repeats; r++) {
           // The count stays in the title: a number on a note reads as a fingering (DRILL-RUBRIC 7).
-          cell.push({ duration: v, notes: x.map((k) => noteOf(A.notes[k])) });
-          cell.push({ duration: v, notes: y.map((k) => noteOf(B.notes[k])) });
+          cell.push({ duration: v, notes: x.map((k) => noteOf(A[k]!)) });
+          cell.push({ duration: v, notes: y.map((k) => noteOf(B[k]!)) });
         }
         return [...cell, restSlot(v.mul(2))];
       });
+      const count = all.length > shown.length ? ` (${shown.length} of ${all.length} cells)` : "";
       drills.push(
         buildDrill(
           passage,
           {
             family: "note-pairs",
             variant: `pair-${i + 1}`,
-            title: `Note pairs ${label(A)} → ${label(B)}${all.length > 1 ? ` (${shown.length} of ${all.length})` : ""}${hands.length > 1 ? `, ${hand} hand` : ""}`,
+            title: `Note pairs ${label(A)} → ${label(B)}${count}${hands.length > 1 ? `, ${hand} hand` : ""}`,
             teacherNote:
               all.length > 1
-                ? `Each small cell isolates one connection between the two positions: ${shown.length} of the ${all.length} possible cells, the simplest first.`
+                ? `Each small cell isolates one connection of the move between the two hand positions: ${shown.length === all.length ? `all ${all.length}` : `${shown.length} of the ${all.length}`} cells, single notes first.`
                 : "The one connection between these two notes, repeated until the move is secure.",
-            studentNote: "Play each cell slowly and evenly as written, rest, then the next. Keep the fingers close to the keys.",
+            studentNote: "Play each cell slowly and evenly with the fingers shown, rest, then the next. Keep the fingers close to the keys.",
             hands: hand,
             segments: [{ [hand]: slots }],
           },
@@ -111,13 +136,13 @@ export function generateNotePairs(passage: Passage, options: NotePairsOptions, c
       );
     }
   }
-  return drills.length ? { drills } : { drills, skipped: "There are no two different consecutive notes or chords to pair." };
+  return drills.length ? { drills } : { drills, skipped: "The hand never moves between two different notes or positions, so there is no connection to pair." };
 }
 
 export const notePairs: DrillFamily<typeof notePairsOptions> = {
   id: "note-pairs",
   label: "Note pairs",
-  describe: "Every small cell between two neighbouring notes or chords, simplest first, each repeated.",
+  describe: "Every small cell of the move between two hand positions, single notes first, each repeated.",
   options: notePairsOptions,
   generate: generateNotePairs,
 };

@@ -122,7 +122,7 @@ export function buildVoicedDrill(
   ctx: DrillContext,
 ): Drill {
   const segments: Segment[] = [{ right: upper, left: lower }];
-  const raw = buildDrill(passage, { ...spec, segments, hands: "both" }, ctx);
+  const raw = buildDrill(passage, { ...spec, segments, hands: "both", oneHand: hand }, ctx);
   const clef = raw.score.measures[0]?.clefs.find((c) => c.staff === 1) ?? { staff: 1, sign: "G" as const, line: 2 };
   const mean = meanMidi(raw.score.events);
   const oneClef = mean >= 58 ? { ...clef, sign: "G" as const, line: 2 } : { ...clef, sign: "F" as const, line: 4 };

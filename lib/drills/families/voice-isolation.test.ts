@@ -63,4 +63,15 @@ describe("voice-isolation", () => {
       { numRuns: 40 },
     );
   });
+
+  // Rubric (voice-isolation; common practice): every line of a multi-voice hand, then two lines together.
+  test("chords of three keys: the inner line alone, then top and lower together, dynamics never stacked", () => {
+    const p = makePassage({ right: "[C4,E4,G4]/2 [D4,F4,A4]/2" });
+    const r = generateVoiceIsolation(p, voiceIsolationOptions.parse({ otherHand: "without" }), makeContext());
+    expect(r.drills.map((d) => d.variant)).toEqual(["top", "lower", "inner", "top-and-lower"]);
+    expect(line(r.drills.find((d) => d.variant === "inner")!, 1)).toEqual(["E4:2", "F4:2"]);
+    const both = r.drills.find((d) => d.variant === "top-and-lower")!;
+    // Both lines start together, so only the top line's "mf" is written there (rubric: never two dynamics on one note).
+    expect(both.score.events.filter((e) => e.dynamic).map((e) => `${e.voice}:${e.dynamic}`)).toEqual(["1:mf"]);
+  });
 });
