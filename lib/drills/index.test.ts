@@ -48,9 +48,9 @@ describe("drill registry", () => {
     } as DrillFamily;
     try {
       const p = makePassage({ right: "C4/4 D4/4 E4/4 F4/4" });
-      const { drills, skipped } = generateDrills(p, { families: ["test-throws", "blocking"] });
+      const { drills, skipped } = generateDrills(p, { families: ["test-throws", "tempo-ladder"] });
       expect(drills.length).toBeGreaterThan(0);
-      expect(drills.every((d) => d.family === "blocking")).toBe(true);
+      expect(drills.every((d) => d.family === "tempo-ladder")).toBe(true);
       expect(skipped).toHaveLength(1);
       expect(skipped[0].family).toBe("test-throws");
       expect(skipped[0].reason).toContain("683/1024 cannot be written");
