@@ -8,6 +8,7 @@ import { makeContext } from "./build";
 import { barCap, capDrill } from "./length";
 import { newFingeringMemo } from "./span";
 import { withLightEndings } from "./groups-option";
+import { withOctaveLines } from "./octave-lines";
 import { blocking } from "./families/blocking";
 import { doubles } from "./families/doubles";
 import { heldTone } from "./families/held-tone";
@@ -111,7 +112,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     try {
       result = family.generate(passage, options, ctx);
       const cap = barCap(passage, ctx);
-      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }).map((d) => capDrill(d, cap));
+      written = withLightEndings(result.drills, { lightEndings: opts.lightEndings ?? false }).map((d) => withOctaveLines(capDrill(d, cap)));
     } catch (error) {
       // A family that cannot write something in this passage is skipped; the others still generate.
       skipped.push({ family: id, reason: `This drill could not be written for these bars: ${reasonOf(error)}` });

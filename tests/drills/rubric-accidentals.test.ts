@@ -7,29 +7,8 @@
 // the end of the bar, for that staff and octave only; the key signature holds otherwise) and the
 // MusicXML 4.0 <accidental> element documentation ("the <accidental> element is used for actual
 // notated accidentals"; <alter> alone sounds the pitch and prints nothing).
-import fs from "node:fs";
-import path from "node:path";
-import { XMLParser } from "fast-xml-parser";
 import { describe, expect, test } from "vitest";
-import { generateDrills } from "../../lib/drills";
-import { pianoPart, readScore, selectPassage, writeMusicXML } from "../../lib/score";
-import type { Hand, Score } from "../../lib/score/types";
-
-const root = path.resolve(__dirname, "../..");
-const corpusDir = path.join(root, "fixtures/reference/scores");
-const piecesDir = path.join(root, "fixtures/pieces");
-/** Every STRIDE-th two-bar window of a corpus file (the demo pieces: every window). */
-const STRIDE = 8;
-
-type Node = Record<string, unknown>;
-const parser = new XMLParser({ preserveOrder: true, ignoreAttributes: false, attributeNamePrefix: "@_", parseTagValue: false, processEntities: false });
-const tag = (n: Node) => Object.keys(n).find((k) => k !== ":@") ?? "";
-const kids = (n: Node | undefined): Node[] => (n ? ((n[tag(n)] as Node[]) ?? []) : []);
-const child = (n: Node | undefined, name: string) => kids(n).find((c) => tag(c) === name);
-const text = (n: Node | undefined): string | undefined => {
-  const t = kids(n).find((c) => "#text" in c);
-  return t ? String(t["#text"]) : undefined;
-};
+import { child, corpusFiles, kids, type Node, parser, pieceFiles, tag, text, writtenDrills } from "./written-drills";
 
 /** Key-signature alteration of a step: sharps in the order F C G D A E B, flats the reverse (common practice). */
 const STEP_FIFTHS = ["F", "C", "G", "D", "A", "E", "B"];
@@ -41,7 +20,7 @@ function keyAlter(fifths: number, step: string): number {
 }
 
 /** Notes whose sounding alteration differs from what the reader would assume, yet carry no <accidental>. */
-export function missingAccidentals(xml: string): string[] {
+function missingAccidentals(xml: string): string[] {
   const doc = parser.parse(xml) as Node[];
   const score = doc.find((n) => tag(n) === "score-partwise");
   const faults: string[] = [];
@@ -95,28 +74,6 @@ export function missingAccidentals(xml: string): string[] {
   return faults;
 }
 
-interface Written {
-  readonly where: string;
-  readonly xml: string;
-}
-
-function drillsOf(score: Score, name: string, hands: readonly (Hand | "both")[], stride: number): Written[] {
-  const part = pianoPart(score) ?? score.parts[0];
-  const out: Written[] = [];
-  for (let b = 0; b + 1 < score.measures.length; b += stride) {
-    for (const hand of hands) {
-      const passage = selectPassage(score, { part: part.id, hand, from: b, to: b + 1 });
-      for (const d of generateDrills(passage, { seed: 1 }).drills) {
-        out.push({ where: `${name} bars ${b + 1}-${b + 2} ${hand} ${d.family}/${d.variant}`, xml: writeMusicXML(d.score) });
-      }
-    }
-  }
-  return out;
-}
-
-const corpusFiles = fs.readdirSync(corpusDir).filter((f) => f.endsWith(".mxl")).sort();
-const pieceFiles = fs.readdirSync(piecesDir).filter((f) => f.endsWith(".musicxml")).sort();
-
 describe("written drills carry the accidentals the key and the bar require (DRILL-RUBRIC §3, MusicXML 4.0 <accidental>)", () => {
   test("the judge itself: it flags a bare altered note and accepts a written one or one the bar already holds", () => {
     const bar = (notes: string) =>
@@ -130,10 +87,7 @@ describe("written drills carry the accidentals the key and the bar require (DRIL
     expect(missingAccidentals(bar(note("C", 1, "<accidental>sharp</accidental>") + note("C", 0)))).toHaveLength(1);
   });
 
-  const written = [
-    ...corpusFiles.flatMap((f) => drillsOf(readScore(new Uint8Array(fs.readFileSync(path.join(corpusDir, f)))).score, f.split("_")[0], ["right", "left"], STRIDE)),
-    ...pieceFiles.flatMap((f) => drillsOf(readScore(fs.readFileSync(path.join(piecesDir, f), "utf8")).score, f, ["right", "left", "both"], 1)),
-  ];
+  const written = writtenDrills();
 
   test("the sample covers every corpus file and demo piece", () => {
     expect(new Set(written.map((w) => w.where.split(" ")[0])).size).toBe(corpusFiles.length + pieceFiles.length);
