@@ -2,6 +2,7 @@
  * Difficulty map of a whole piece: per bar and hand, the fingering model's rule points and the widest
  * stretch, each turned into a 0–1 score and combined; plus the hardest bars with plain-word reasons.
  */
+import { pianoPart } from "../score/parts";
 import type { Hand, Score } from "../score/types";
 import type { FingeringModel } from "./fingering-rules";
 import { barFacts, handsOf, intervalName, type BarFacts } from "./difficulty-bars";
@@ -44,7 +45,10 @@ function analyse(score: Score, options: DifficultyOptions): Analysis {
   const model = options.model ?? "parncutt";
   const bars = score.measures.length;
   const out: Analysis = { right: [], left: [] };
-  for (const hands of handsOf(score).values()) {
+  // Only the piano's staves are hands: a song's voice part never counts (lib/score/parts).
+  const piano = pianoPart(score);
+  for (const [part, hands] of handsOf(score)) {
+    if (piano && part !== piano.id) continue;
     for (const hand of ["right", "left"] as const) {
       if (hands[hand].length > 0) out[hand].push(barFacts(hands[hand], hand, bars, profile.octaveMm, model, (m) => score.measures[m]?.key));
     }
@@ -57,8 +61,9 @@ function scores(parts: BarFacts[][], bars: number, profile: HandProfile): number
 }
 
 /**
- * Difficulty per bar (0–1) for each hand; bars where a hand has no notes score 0. With several parts,
- * each bar takes the hardest part.
+ * Difficulty per bar (0–1) for each hand of the piano part (found by staves and name, so a song's voice
+ * part never counts); bars where a hand has no notes score 0. When no part looks like a piano, each bar
+ * takes the hardest part.
  *
  * @example
  * difficultyMap(score).right[3] // e.g. 0.42
@@ -100,7 +105,7 @@ function reasonsFor(f: BarFacts, profile: HandProfile): string[] {
 }
 
 /**
- * The `n` hardest (bar, hand) pairs, hardest first, with reasons in plain words
+ * The `n` hardest (bar, hand) pairs of the piano part (as `difficultyMap`), hardest first, with reasons in plain words
  * ("stretch of a tenth (212 mm)", "many position changes", "thumb on black keys" …).
  *
  * @example

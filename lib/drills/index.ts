@@ -8,6 +8,7 @@ import { makeContext } from "./build";
 import { barCap, capDrill } from "./length";
 import { newFingeringMemo } from "./span";
 import { withEndings, type Endings } from "./groups-option";
+import { withOctaveLines } from "./octave-lines";
 import { blocking } from "./families/blocking";
 import { chaining } from "./families/chaining";
 import { octaveDoubling } from "./families/octave-doubling";
@@ -121,7 +122,7 @@ export function generateDrills(passage: Passage, opts: GenerateOptions = {}): Ge
     try {
       result = family.generate(passage, options, ctx);
       const cap = barCap(passage, ctx);
-      written = withEndings(result.drills, opts.endings ?? (opts.lightEndings ? "short" : "written")).map((d) => capDrill(d, cap));
+      written = withEndings(result.drills, opts.endings ?? (opts.lightEndings ? "short" : "written")).map((d) => withOctaveLines(capDrill(d, cap)));
     } catch (error) {
       // A family that cannot write something in this passage is skipped; the others still generate.
       skipped.push({ family: id, reason: `This drill could not be written for these bars: ${reasonOf(error)}` });

@@ -4,6 +4,7 @@
  * once for their full merged length (`mergeTies`), grace notes take their short slot before the
  * beat and dynamics set the velocity. Pure and client-safe: imports only lib/score.
  */
+import { pianoPart } from "../score/parts";
 import { toPerformance } from "../score/performance";
 import type { Score } from "../score/types";
 
@@ -43,7 +44,10 @@ export interface PlaybackOptions {
   /** First and last measure to play, as 0-based measure indices (default: the whole score). */
   fromMeasure?: number;
   toMeasure?: number;
-  /** Only this hand's staff (staff 1 right, staff 2 left); a one-staff part plays whole. */
+  /**
+   * Only this hand: the piano part's staff 1 (right) or 2 (left), the piano found by staves and name
+   * (lib/score/parts), so a song's voice part is left out; a one-staff piano part plays whole.
+   */
   hand?: "right" | "left";
 }
 
@@ -69,12 +73,14 @@ export function playbackEvents(score: Score, options: PlaybackOptions = {}): Sco
   const first = measures[from];
   const startQ = first ? first.start.valueOf() : 0;
   const endQ = measures[to] ? measures[to].start.add(measures[to].length).valueOf() : 0;
-  const staves = score.parts[0]?.staves ?? 1;
+  const piano = options.hand === undefined ? undefined : (pianoPart(score) ?? score.parts[0]);
+  const staves = piano?.staves ?? 1;
   const staff = options.hand === undefined || staves < 2 ? null : options.hand === "right" ? 1 : 2;
+  const played = (n: { part: string; staff: number }) => !piano || (n.part === piano.id && (staff === null || n.staff === staff));
   // Notes only: the events are bounded by the number of notes in the file, never by a length in it.
   const perf = toPerformance(score, { clicks: false });
   const events = perf.notes
-    .filter((n) => n.startQuarters >= startQ && n.startQuarters < endQ && (staff === null || n.staff === staff))
+    .filter((n) => n.startQuarters >= startQ && n.startQuarters < endQ && played(n))
     .map((n) => ({ midi: n.midi, onsetQ: n.startQuarters, durationQ: n.quarters, velocity: n.velocity, staff: n.staff }));
   const ranged = measures.slice(from, to + 1);
   const anchor = ranged.find((m) => !m.implicit) ?? first;

@@ -3,7 +3,7 @@
  * accidental when its alteration differs from what the key signature and the bar's earlier notes of
  * the same step and octave on the same staff imply (common practice; MusicXML 4.0 leaves this to the
  * writer: `<alter>` is the sound, `<accidental>` the sign). A note tied over from an earlier note
- * shows none. The first note of a step and octave after a barline, when the previous bar altered it
+ * shows none, and later notes of its bar restate their sign. The first note of a step and octave after a barline, when the previous bar altered it
  * away from the key, gets a courtesy sign (`cautionary="yes"`).
  */
 import type { KeySignature, Measure } from "./types";
@@ -63,8 +63,8 @@ export function barAccidentals(
     const fromKey = keyAlter(keyAt(p), pitch.step);
     const inForce = state.get(slot) ?? fromKey;
     if (p.tieStop) {
-      // A tied-over note shows no sign; the alteration it holds stays in force for this pitch.
-      if (!state.has(slot) && pitch.alter !== fromKey) state.set(slot, pitch.alter);
+      // A tied-over note shows no sign, and the sign it carries over the barline does not hold for
+      // later notes of the bar: they show their own (common practice; from memory: Gould, Behind Bars).
       continue;
     }
     const sign = SIGN[pitch.alter];
