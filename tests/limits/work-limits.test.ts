@@ -27,7 +27,7 @@ let previewRoute: typeof import("../../app/api/drills/preview/route");
 let work: typeof import("../../lib/limits/work");
 
 const root = path.resolve(__dirname, "../..");
-const GENERATE = { families: ["blocking"], options: {} };
+const GENERATE = { families: ["blocking", "tempo-ladder"], options: {} };
 
 beforeAll(async () => {
   t = await useTempDatabase("work-limits");
