@@ -45,4 +45,15 @@ describe("createPool", () => {
     expect(after.kept).toBe(0);
     expect(after.heapUsedMb).toBeLessThan(48);
   });
+
+  test("an idle worker exits, giving back all it held", async () => {
+    const pool = createPool({ filename: worker, threads: 1, timeoutMs: 5_000, maxOldGenerationSizeMb: 48, idleTimeoutMs: 200 });
+    onTestFinished(() => pool.close());
+    const held = await pool.run<Answer>({ kind: "hold", chunks: 10 });
+    expect(held.kept).toBe(10);
+    expect(pool.stats().threads).toBe(1);
+    await new Promise((r) => setTimeout(r, 1_000));
+    expect(pool.stats().threads).toBe(0);
+    expect((await pool.run<Answer>({ kind: "spin", ms: 1 })).kept).toBe(0);
+  });
 });

@@ -29,6 +29,10 @@ export interface PoolOptions {
   timeoutMs: number;
   /** Old-generation heap per worker in MB (V8 resourceLimits.maxOldGenerationSizeMb). */
   maxOldGenerationSizeMb: number;
+  /** An idle worker exits after this many ms (default 5 s). */
+  idleTimeoutMs?: number;
+  /** Added to the workers' nice value (default 10; 0 keeps the request thread's priority). */
+  niceIncrement?: number;
   /** What the job was, for messages ("this handout"). */
   what?: string;
 }
@@ -50,11 +54,15 @@ export function createPool(opts: PoolOptions): JobPool {
   const threads = opts.threads ?? 2;
   const piscina = new Piscina({
     filename: opts.filename,
-    minThreads: 1,
+    // No thread while idle: a worker (jsdom, the engraver, its caches) gives all its memory back 5 s after its
+    // last job, at the cost of a cold start (about a second) for the next one.
+    minThreads: 0,
     maxThreads: threads,
-    // The gate (lib/jobs/gate.ts) bounds the queue and answers 503; the pool itself never holds more.
-    maxQueue: "auto",
-    idleTimeout: 60_000,
+    // Every caller goes through the gate (lib/jobs/gate.ts), which bounds the queue and answers 503.
+    maxQueue: Infinity,
+    idleTimeout: opts.idleTimeoutMs ?? 5_000,
+    // Workers run at a lower priority (nice +10, Linux) so the request thread answers first on a busy machine.
+    niceIncrement: opts.niceIncrement ?? 10,
     resourceLimits: { maxOldGenerationSizeMb: opts.maxOldGenerationSizeMb, maxYoungGenerationSizeMb: 32 },
   });
   const what = opts.what ?? "this job";
