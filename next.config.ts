@@ -33,7 +33,8 @@ const nextConfig: NextConfig = {
   poweredByHeader: false,
   // A second build folder (e.g. for the hardening suite) so two builds never overwrite each other.
   distDir: process.env.KNOTWORK_DIST_DIR || ".next",
-  serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay"],
+  // piscina loads its own worker file from node_modules, so it must not be bundled either.
+  serverExternalPackages: ["jsdom", "pdfkit", "svg-to-pdfkit", "opensheetmusicdisplay", "piscina"],
   // forbidden() + app/forbidden.tsx: a student opening a teacher page gets a real 403.
   experimental: {
     authInterrupts: true,

@@ -34,6 +34,8 @@ elif [ -n "$(find app components db lib public proxy.ts next.config.ts package.j
       -newer .next/BUILD_ID -type f -not -path 'db/migrations/meta/*' 2>/dev/null | head -n 1)" ]; then
   stale=1
 fi
+# The heavy-work worker bundle (lib/jobs/worker.ts → build/worker/heavy-work.cjs), always: under a second.
+node scripts/build-worker.mjs
 if [ "$stale" = 1 ]; then
   echo "Building Knotwork (first run or sources changed; this takes a few minutes)…"
   npx next build

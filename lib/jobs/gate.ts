@@ -2,8 +2,8 @@
  * A bounded queue in front of CPU-heavy work (generating drills, engraving, PDF handouts): at most
  * `running` jobs at once and `queued` waiting; a request that finds the queue full is answered at once
  * with 503 and Retry-After instead of waiting behind everyone (OWASP Denial of Service Cheat Sheet:
- * bound queues, fail fast). The jobs still run on the request thread: this bounds how many run and how
- * much memory they hold together, not how long one blocks the event loop (a worker pool would).
+ * bound queues, fail fast). The jobs themselves run in the worker pool (lib/jobs/heavy.ts), so the gate
+ * bounds how many wait; the pool keeps them off the request thread and limits their time and memory.
  */
 
 /** The queue was full; answer 503 with Retry-After. */

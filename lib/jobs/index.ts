@@ -6,8 +6,13 @@
  *
  * - gate.ts: `heavyWork` (2 running, 16 waiting), `QueueFullError`, `busyResponse`
  * - render-cache.ts: `handoutPdf(input)`, the content-keyed handout cache
+ * - pool.ts: `createPool` (piscina: per-job time limit, per-worker heap limit), `JobLimitError`, `limitResponse`
+ * - heavy.ts: `runHeavy(task)`, the process's pool fed build/worker/heavy-work.cjs (in-process without it)
+ * - worker.ts: the worker's entry (handouts, knot drills, reading uploads), bundled by scripts/build-worker.mjs
  */
 import "server-only";
 
 export * from "./gate";
 export * from "./render-cache";
+export * from "./pool";
+export { runHeavy, heavyPool, workerBundlePath } from "./heavy";

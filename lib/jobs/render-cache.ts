@@ -3,13 +3,14 @@
  * so a second request is a hash and a look-up instead of engraving and laying out every drill again.
  * (The drills inside are engraved through lib/handout/engraving-cache.ts.)
  */
-import { renderHandoutPdf } from "../handout/render-handout-pdf";
 import type { HandoutInput } from "../handout/input";
 import { contentCache } from "../handout/content-cache";
 import { heavyWork } from "./gate";
+import { runHeavy } from "./heavy";
 
-// A cached handout is answered at once; a new one waits its turn in the bounded queue (lib/jobs/gate.ts).
-const handouts = contentCache("handout", (input: HandoutInput) => heavyWork.run(() => renderHandoutPdf(input)), {
+// A cached handout is answered at once; a new one waits its turn in the bounded queue (lib/jobs/gate.ts)
+// and is rendered in a worker thread (lib/jobs/heavy.ts).
+const handouts = contentCache("handout", (input: HandoutInput) => heavyWork.run(() => runHeavy({ kind: "handout", input })), {
   maxEntries: 64,
   maxBytes: 64 * 1024 * 1024,
   weigh: (pdf) => pdf.byteLength,

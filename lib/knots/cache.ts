@@ -7,10 +7,11 @@
 import { createHash } from "node:crypto";
 import type { HandProfile } from "../drills/index";
 import type { GenerateRequest } from "./generate-request";
-import { generateForPassage, knotDrillsJson, passageOf, type KnotSource } from "./generate";
+import type { KnotSource } from "./generate";
 import { Lru } from "../lru";
 import { heavyWork } from "../jobs/gate";
-import { parsedScore, cachedScore } from "./score-cache";
+import { runHeavy } from "../jobs/heavy";
+import { SCORE_NOT_HELD } from "../jobs/worker";
 
 /** What the handler knows about a knot before reading its piece (db/queries/knot-drills getKnotStamp). */
 export interface KnotStamp extends Pick<KnotSource, "part" | "hand" | "fromBar" | "toBar"> {
@@ -25,7 +26,8 @@ const MAX_BYTES = 32 * 1024 * 1024;
 /** UTF-8 bytes, encoded once: the same answer is written many times. */
 const bodies = new Lru<string, Uint8Array<ArrayBuffer>>({ maxEntries: MAX_BODIES, maxWeight: MAX_BYTES, weigh: (b) => b.byteLength });
 const pending = new Map<string, Promise<Uint8Array<ArrayBuffer> | null>>();
-const utf8 = new TextEncoder();
+/** Pieces (id@change) lately sent to the workers, which keep them parsed (lib/knots/score-cache.ts there). */
+const piecesSent = new Lru<string, true>({ maxEntries: 8 });
 
 /** JSON with object keys sorted at every level, so equal requests give equal text. */
 export function stableJson(value: unknown): string {
@@ -52,8 +54,8 @@ export function drillsCacheKey(knot: KnotStamp, req: GenerateRequest, profile?: 
 }
 
 /**
- * The generate handler's JSON body (UTF-8) for the knot, from the cache or freshly generated. The piece's
- * MusicXML is loaded only when its parsed copy is not cached; null when it is gone. Throws ScoreError
+ * The generate handler's JSON body (UTF-8) for the knot, from the cache or freshly generated in a worker. The
+ * piece's MusicXML is loaded only when no worker holds it parsed; null when it is gone. Throws ScoreError
  * when the knot's bars cannot be read (nothing is cached then).
  */
 export async function knotDrillsBody(
@@ -67,16 +69,29 @@ export async function knotDrillsBody(
   if (hit !== undefined) return hit;
   const running = pending.get(key);
   if (running) return running;
-  // Through the bounded queue of heavy work (lib/jobs/gate.ts): QueueFullError when it is full.
+  // Through the bounded queue of heavy work (lib/jobs/gate.ts): QueueFullError when it is full. The piece is
+  // read and the drills generated in a worker thread (lib/jobs/heavy.ts), which keeps parsed pieces by stamp.
   const work = heavyWork.run(async () => {
     const stamp = { id: knot.scoreId, updatedAt: knot.scoreUpdatedAt };
-    let score = cachedScore(stamp);
-    if (!score) {
-      const xml = await loadMusicXml();
-      if (xml === null) return null;
-      score = parsedScore(xml, stamp);
+    const part = { part: knot.part, hand: knot.hand, fromBar: knot.fromBar, toBar: knot.toBar };
+    const task = (musicxml: string | null) => runHeavy({ kind: "knot-drills", musicxml, stamp, knot: part, req, profile });
+    const sent = `${stamp.id}@${stamp.updatedAt.getTime()}`;
+    let out: Uint8Array | undefined;
+    // A piece sent lately is probably still parsed in a worker: ask without loading it, load it if not.
+    if (piecesSent.get(sent)) {
+      out = await task(null).catch((err: unknown) => {
+        if ((err as Error).name === SCORE_NOT_HELD) return undefined;
+        throw err;
+      });
     }
-    const body = utf8.encode(JSON.stringify(knotDrillsJson(generateForPassage(passageOf(score, knot), req, profile))));
+    if (!out) {
+      const musicxml = await loadMusicXml();
+      if (musicxml === null) return null;
+      out = await task(musicxml);
+      piecesSent.set(sent, true);
+    }
+    const body = new Uint8Array(out.byteLength);
+    body.set(out);
     bodies.set(key, body);
     return body;
   });

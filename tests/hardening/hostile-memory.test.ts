@@ -5,9 +5,10 @@
  * Stated cap: the server stays under RSS_CAP_MB (it idles at about 250–300 MB after the suite's
  * set-up; before the fixes, five chunked 50 MB uploads took it to 685 MB and opening a stored piece
  * with a 10^15-quarter note to 5.4 GB and a crash). /api/health must answer every time (within 5 s);
- * its p99 is printed next to the 250 ms goal, which is not asserted yet: reading, generating and
- * rendering still run on the request thread (issue 14, worker pool still open), and on this shared
- * 2-core machine the first run measured 4.2 s (chunked uploads) and 1.7 s (stored pieces).
+ * its p99 is printed next to the 250 ms goal, which is not asserted yet: uploads are read, drills
+ * generated and handouts rendered in the worker pool (lib/jobs/heavy.ts), but opening a stored piece
+ * still parses it on the request thread, and on this shared 2-core machine the first run measured
+ * 4.2 s (chunked uploads) and 1.7 s (stored pieces).
  * OWASP Denial of Service Cheat Sheet (limit request sizes, bound work per request); OWASP File Upload
  * Cheat Sheet ("Set a file size limit").
  */

@@ -4,9 +4,10 @@
  * list, the sheet JSON and a piece page — while /api/health is asked back to back and the server's RSS
  * is sampled. Asserted: no error other than a deliberate 503 (queue full, with Retry-After), work gets
  * done, and memory is back near its start 10 s after the load (within MEMORY_SLACK_MB). The /api/health
- * figures are printed and written next to the 250 ms p99 goal, which does NOT hold yet: a cold handout
- * render (OSMD in jsdom, then pdfkit) still runs on the request thread and holds the event loop for
- * seconds (issue 14: the worker pool is still open). Figures go to artifacts/bench-load-mixed.json and
+ * figures are printed and written next to the 250 ms p99 goal. Handouts and generation now run in the
+ * worker pool (lib/jobs/heavy.ts), which took health from median 215 / p99 3,161 ms (KNOTWORK_WORKERS=0) to
+ * median 31 / p99 444 ms on the shared 2-core machine; the goal is still not asserted because it is not met
+ * there (the workers and the request thread share two busy cores). Figures go to artifacts/bench-load-mixed.json and
  * the README bench table.
  */
 import fs from "node:fs";
@@ -88,6 +89,6 @@ describe("mixed load, 20 clients × 30 s", () => {
     expect(results.filter((r) => r.status === 200).length).toBeGreaterThan(CLIENTS);
     expect(endMb).toBeLessThan(startMb + MEMORY_SLACK_MB);
     const healthFailures = healthMs.filter((ms) => !Number.isFinite(ms)).length;
-    console.log(`/api/health under mixed load: p99 ${figures.health.p99} ms (goal < ${HEALTH_P99_MS} ms, not met yet), ${healthFailures} of ${healthMs.length} probes slower than 5 s`);
+    console.log(`/api/health under mixed load: p99 ${figures.health.p99} ms (goal < ${HEALTH_P99_MS} ms, not asserted), ${healthFailures} of ${healthMs.length} probes slower than 5 s`);
   });
 });

@@ -44,6 +44,8 @@ export function run(cmd: string, args: string[], env: NodeJS.ProcessEnv): void {
  * keeps an existing build even when sources are newer (for working on the suite itself).
  */
 export function ensureBuild(env: NodeJS.ProcessEnv = process.env): void {
+  // The heavy-work worker bundle (lib/jobs/worker.ts) is built every time: it takes well under a second.
+  run(process.execPath, [path.join(repoRoot, "scripts/build-worker.mjs")], env);
   const reuse = process.env.KNOTWORK_REUSE_BUILD === "1" && fs.existsSync(path.join(distDir(), "BUILD_ID"));
   if (reuse || !buildIsStale()) return;
   const tsconfig = path.join(repoRoot, "tsconfig.json");
@@ -88,7 +90,10 @@ export async function waitForHealth(url: string, child: ChildProcess, timeoutMs 
 /** `next start` on 127.0.0.1:port; output goes to the given stream mode (quiet by default). */
 export function startNext(port: number, env: NodeJS.ProcessEnv, stdio: "ignore" | "inherit" = "ignore"): ChildProcess {
   const bin = path.join(repoRoot, "node_modules/.bin/next");
-  return spawn(bin, ["start", "-p", String(port), "-H", "127.0.0.1"], { cwd: repoRoot, env, stdio: ["ignore", stdio, stdio] });
+  // Not a vitest process: heavy work runs in its worker pool as in production (lib/jobs/heavy.ts).
+  const serverEnv = { ...env };
+  delete serverEnv.VITEST;
+  return spawn(bin, ["start", "-p", String(port), "-H", "127.0.0.1"], { cwd: repoRoot, env: serverEnv, stdio: ["ignore", stdio, stdio] });
 }
 
 /** Stops a server started here: SIGTERM, then SIGKILL when it lingers. */

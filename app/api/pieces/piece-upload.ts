@@ -5,8 +5,11 @@
 import type { Db } from "@/db";
 import { deleteScore, insertScore } from "@/db/queries/scores";
 import type { FileStore } from "@/lib/storage";
-import { isScoreError, readScore } from "@/lib/score";
-import { checkScoreBounds } from "@/lib/score/limits";
+import { isScoreError } from "@/lib/score";
+import { heavyWork, QueueFullError } from "@/lib/jobs/gate";
+import { runHeavy } from "@/lib/jobs/heavy";
+import { JobLimitError } from "@/lib/jobs/pool";
+import type { UploadRead } from "@/lib/jobs/worker";
 
 /** The size cap shown on the form and enforced here. */
 export const MAX_UPLOAD_BYTES = 5 * 1024 * 1024;
@@ -29,6 +32,8 @@ const RISKY_INNER = /\.(exe|bat|cmd|com|sh|js|mjs|php|phtml|html?|svg|jar|dll|ms
 export interface UploadOutcome {
   status: number;
   body: { id: string; title: string; bars: number; warnings: number } | { error: string; field?: "file" | "confirm" };
+  /** Extra answer headers (Retry-After on a busy 503). */
+  headers?: Record<string, string>;
 }
 
 export interface UploadContext {
@@ -87,22 +92,21 @@ export async function acceptUpload(form: FormData, ctx: UploadContext): Promise<
   let cleaned: string;
   let summary: { title: string; composer: string | null; bars: number; parts: { id: string; name: string; staves: number }[]; warnings: number };
   try {
-    const read = readScore(bytes, { clean: true });
+    // Read in the worker pool, through the bounded queue of heavy work (lib/jobs/heavy.ts, lib/jobs/gate.ts).
+    const out = await heavyWork.run(() => runHeavy({ kind: "read-upload", bytes }));
+    const read = JSON.parse(new TextDecoder().decode(out)) as UploadRead;
+    if (read.empty) return refuse(422, `"${file.name}" has no bars of music.`);
     cleaned = read.cleaned;
-    const { score, warnings } = read;
-    if (score.measures.length === 0 || score.parts.length === 0) {
-      return refuse(422, `"${file.name}" has no bars of music.`);
-    }
-    // Durations, onsets, divisions and tuplets within sane bounds (throws a ScoreError naming the bar).
-    checkScoreBounds(score);
     summary = {
-      title: score.meta.title.trim() || titleFromName(file.name),
-      composer: score.meta.composer.trim() || null,
-      bars: score.measures.filter((m) => !m.implicit).length,
-      parts: score.parts.map((p) => ({ id: p.id, name: p.name, staves: p.staves })),
-      warnings: warnings.length,
+      title: read.title.trim() || titleFromName(file.name),
+      composer: read.composer.trim() || null,
+      bars: read.bars,
+      parts: read.parts,
+      warnings: read.warnings,
     };
   } catch (e) {
+    if (e instanceof QueueFullError) return { ...refuse(503, e.message), headers: { "Retry-After": String(e.retryAfterSeconds) } };
+    if (e instanceof JobLimitError) return { ...refuse(503, `"${file.name}" could not be read: ${e.message}`), headers: { "Retry-After": "30" } };
     if (isScoreError(e)) return refuse(422, `"${file.name}" could not be read: ${e.message}.`);
     return refuse(422, `"${file.name}" could not be read as MusicXML.`);
   }

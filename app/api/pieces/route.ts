@@ -40,5 +40,5 @@ export async function POST(request: Request) {
     revalidatePath("/pieces");
     revalidatePath("/home");
   }
-  return NextResponse.json(outcome.body, { status: outcome.status });
+  return NextResponse.json(outcome.body, { status: outcome.status, headers: outcome.headers });
 }

@@ -6,6 +6,7 @@ import { knotDrillsBody } from "@/lib/knots/cache";
 import { readJsonCapped } from "@/lib/limits/body";
 import { isWorkLimitError } from "@/lib/limits/work";
 import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
+import { JobLimitError, limitResponse } from "@/lib/jobs/pool";
 import { isScoreError } from "@/lib/score";
 
 export const dynamic = "force-dynamic";
@@ -41,6 +42,7 @@ export async function POST(request: Request, { params }: { params: Promise<{ kno
     if (isScoreError(err)) return jsonError(422, `The knot's bars could not be read: ${err.message}`);
     if (isWorkLimitError(err)) return jsonError(422, err.message);
     if (err instanceof QueueFullError) return busyResponse(err);
+    if (err instanceof JobLimitError) return limitResponse(err);
     throw err;
   }
 }

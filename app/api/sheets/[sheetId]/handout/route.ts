@@ -4,6 +4,7 @@ import { PAPER_SIZES, type Paper } from "@/lib/handout";
 import { canReadSheet } from "@/lib/sheets/access";
 import { busyResponse, QueueFullError } from "@/lib/jobs/gate";
 import { handoutPdf } from "@/lib/jobs/render-cache";
+import { JobLimitError, limitResponse } from "@/lib/jobs/pool";
 import { handoutFileName, loadHandoutInput } from "./handout-data";
 
 export const dynamic = "force-dynamic";
@@ -31,6 +32,7 @@ export async function GET(request: Request, { params }: { params: Promise<{ shee
     pdf = await handoutPdf(input);
   } catch (err) {
     if (err instanceof QueueFullError) return busyResponse(err);
+    if (err instanceof JobLimitError) return limitResponse(err);
     throw err;
   }
   const download = url.searchParams.get("download") === "1";
