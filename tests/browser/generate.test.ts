@@ -219,7 +219,8 @@ describe("generate drills for a knot and save a drill sheet", () => {
     expect((await page.goto(sheetPath))?.status()).toBe(404);
     const knotId = knotPath.split("/").pop()!;
     const sheetId = sheetPath.split("/").pop()!;
-    expect((await page.request.post(`/api/knots/${knotId}/drills`, { data: { families: ["blocking"] } })).status()).toBe(404);
+    // With the page's own Origin (the Origin rule in proxy.ts), so the answer is about the foreign id.
+    expect((await page.request.post(`/api/knots/${knotId}/drills`, { data: { families: ["blocking"] }, headers: { origin: new URL(page.url()).origin } })).status()).toBe(404);
     expect((await page.request.get(`/api/sheets/${sheetId}/zip`)).status()).toBe(404);
     expect((await page.request.get(savedMidiHref)).status()).toBe(404);
     const req = encodeURIComponent(JSON.stringify({ families: ["blocking"] }));
