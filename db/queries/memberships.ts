@@ -4,15 +4,18 @@ import { session } from "../auth-schema";
 import { membership, studio } from "../schema";
 import { preparedFor } from "./prepared";
 
+/** What a signed-in request needs to know of its member: the membership, role and studio. */
+const memberColumns = {
+  membershipId: membership.id,
+  studioId: membership.studioId,
+  role: membership.role,
+  studioName: studio.name,
+};
+
 /** Runs on every signed-in request: built once per database handle. */
 const membershipOfUser = preparedFor((database: Db) =>
   database
-    .select({
-      membershipId: membership.id,
-      studioId: membership.studioId,
-      role: membership.role,
-      studioName: studio.name,
-    })
+    .select(memberColumns)
     .from(membership)
     .innerJoin(studio, eq(studio.id, membership.studioId))
     .where(eq(membership.userId, sql.placeholder("userId")))
@@ -24,12 +27,7 @@ const membershipOfUser = preparedFor((database: Db) =>
 /** The same, only while the session row still exists (revoked sessions lose their studio at once). */
 const membershipOfSession = preparedFor((database: Db) =>
   database
-    .select({
-      membershipId: membership.id,
-      studioId: membership.studioId,
-      role: membership.role,
-      studioName: studio.name,
-    })
+    .select(memberColumns)
     .from(membership)
     .innerJoin(studio, eq(studio.id, membership.studioId))
     .innerJoin(session, and(eq(session.id, sql.placeholder("sessionId")), eq(session.userId, membership.userId)))

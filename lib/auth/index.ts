@@ -18,21 +18,12 @@ import { db } from "../../db";
 import * as schema from "../../db/schema";
 import { authSecret, readEnv } from "../env";
 import { resetPasswordMail, sendMail } from "../mail";
+import { ownOrigins } from "../security/origin";
 import { afterPasswordReset } from "../security/password-reset";
 import { signInLimitHooks } from "./sign-in-limit";
 import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "./password-rules";
 
 const env = readEnv();
-
-/** The configured origin, plus its localhost / 127.0.0.1 twin, so a local demo works under either name. */
-function localTwins(baseURL: string): string[] {
-  const url = new URL(baseURL);
-  const twin = new URL(baseURL);
-  if (url.hostname === "localhost") twin.hostname = "127.0.0.1";
-  else if (url.hostname === "127.0.0.1") twin.hostname = "localhost";
-  else return [url.origin];
-  return [url.origin, twin.origin];
-}
 
 /** Password limits, re-exported for server code that already imports auth (see password-rules). */
 export { MIN_PASSWORD_LENGTH, MAX_PASSWORD_LENGTH };
@@ -49,7 +40,8 @@ export const auth = betterAuth({
   database: drizzleAdapter(db, { provider: "sqlite", schema }),
   secret: authSecret(env),
   baseURL: env.BETTER_AUTH_URL,
-  trustedOrigins: localTwins(env.BETTER_AUTH_URL),
+  // The configured origin and its localhost / 127.0.0.1 twin, the same list proxy.ts checks.
+  trustedOrigins: ownOrigins(env.BETTER_AUTH_URL),
   telemetry: { enabled: false },
   emailAndPassword: {
     enabled: true,
