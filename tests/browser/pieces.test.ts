@@ -178,7 +178,7 @@ describe("pieces in the browser", () => {
       const multipart: Record<string, string | { name: string; mimeType: string; buffer: Buffer }> = { file: { name: c.name, mimeType: c.mimeType, buffer: c.buffer } };
       if (c.confirm) multipart.confirm = c.confirm;
       // A state-changing request carries the page's Origin, as a browser sends it (the Origin rule in proxy.ts).
-      const res = await page.request.post("/api/pieces", { multipart, headers: { origin: new URL(page.url()).origin } });
+      const res = await page.request.post("/api/pieces", { multipart, headers: { origin: new URL(baseURL).origin } });
       expect(res.status(), c.label).toBe(c.status);
       expect(((await res.json()) as { error: string }).error, c.label).toMatch(c.message);
       expect(await scoreRows(), c.label).toBe(rows);

@@ -26,7 +26,7 @@ async function both(task: HeavyTask): Promise<[HeavyResult, HeavyResult]> {
 
 describe("heavy-work worker bundle", () => {
   test("generates the same drills JSON as the request thread would", async () => {
-    const req = GenerateRequest.parse({ families: ["blocking", "stops"], options: {} });
+    const req = GenerateRequest.parse({ families: ["blocking", "stops", "tempo-ladder"], options: {} });
     const task: HeavyTask = {
       kind: "knot-drills",
       musicxml: demoPiece("lantern-waltz"),
