@@ -25,12 +25,13 @@ const files = [
   ...rootFiles.map((f) => path.join(repoRoot, f)),
 ];
 
-// Patterns that reach outside the checkout. This file names them, so it is skipped.
+// Patterns that reach outside the checkout (this file included: it spells them only in parts).
 const outside: { name: string; pattern: RegExp }[] = [
-  { name: "a sibling folder through ../shared", pattern: /\.\.\/shared\b/ },
+  // Built from parts so this file does not itself contain the path it looks for.
+  { name: "a sibling shared folder", pattern: new RegExp(["\\.\\.", "shared\\b"].join("\\/")) },
   { name: "a sibling folder through ../../../ from a top-level folder", pattern: /["'`](?:\.\.\/){3,}/ },
   { name: "an absolute machine path", pattern: /["'`]\/(?:work|Users|mnt|srv)\// },
-  { name: "the removed reference-folder variable", pattern: /KNOTWORK_REFERENCE_DIR/ },
+  { name: "the removed reference-folder variable", pattern: new RegExp(["KNOTWORK", "REFERENCE", "DIR"].join("_")) },
 ];
 
 describe("the repository is self-contained", () => {
@@ -41,7 +42,6 @@ describe("the repository is self-contained", () => {
 
   test.each(outside)("no file reads $name", ({ pattern }) => {
     const hits = files
-      .filter((f) => f !== __filename)
       .filter((f) => pattern.test(fs.readFileSync(f, "utf8")))
       .map((f) => path.relative(repoRoot, f));
     expect(hits).toEqual([]);
